@@ -1,0 +1,14 @@
+export * from "./types";
+export { seededRandom, type SeededRandom } from "./seeded-random";
+export { deriveSeed } from "./derive-seed";
+export { autoregressiveDrift } from "./autoregressive-drift";
+export { cleanOverallCoefficient } from "./clean-overall-coefficient";
+export { foulingGrowth, validateFoulingModel } from "./fouling-growth";
+export { foulingHistory, foulingResistanceAt, cycleResistance, cycleIndexAt, type FoulingCycle } from "./fouling-history";
+export { operatingConditions, OPERATING_MODES, type OperatingConditions, type TimeGrid } from "./operating-conditions";
+export { instrumentFaultEffect, faultActive } from "./instrument-fault-effect";
+export { measureReadings, type MeasuredData, type TrueColumns } from "./measure-readings";
+export { referenceDuty } from "./reference-duty";
+export { simulateExchanger, DEFAULT_STEP_MS } from "./simulate-exchanger";
+export { trueThresholdCrossing, type ThresholdCrossingOptions } from "./true-threshold-crossing";
+export { referenceDutyCurve } from "./reference-duty-curve";

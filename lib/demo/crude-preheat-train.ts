@@ -1,0 +1,163 @@
+import type { DemoAssetDefinition } from "./demo-asset-definition";
+import { DEMO_HEAT_CAPACITY as CP } from "./demo-streams";
+
+/** Crude charge to the preheat train at reference throughput, kg/s (about 380 t/h). */
+const CRUDE_FLOW = 105;
+const ONE_SHELL = { kind: "shell-and-tube", shells: 1 } as const;
+const TWO_SHELLS = { kind: "shell-and-tube", shells: 2 } as const;
+const CRUDE_STREAM = { name: "crude", heatCapacity: CP.crude };
+
+/**
+ * Unit CDU-1 crude preheat train: crude (tube side, cold) against products and pumparounds (hot), in train
+ * order; the desalter sits between E-1104 and E-1105. Crude-side design fouling 0.00035–0.0007 m²·K/W
+ * (TEMA-like values for crude, FIELD-NOTES §3, marked [M] there). Crude fouling is asymptotic or linear.
+ */
+export const CRUDE_PREHEAT_TRAIN: DemoAssetDefinition[] = [
+  {
+    tag: "E-1101", name: "Crude / kerosene product exchanger", unitCode: "CDU-1", service: "crude preheat (cold end)",
+    arrangement: ONE_SHELL, tubePasses: 2, areaM2: 140,
+    hotStream: { name: "kerosene product", heatCapacity: CP.kerosene }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 458.15, coldInletK: 303.15, hotFlowKgPerS: 13, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 3_460_000, designUWPerM2K: 330, designFoulingM2KPerW: 0.00035,
+    hotFilmShare: 0.45, coldFilmShare: 0.45, thresholdFraction: 0.83,
+    temperatureUncertaintyK: 0.4, flowUncertaintyFraction: 0.015, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "asymptotic", timeConstantDays: 300 }, serviceStart: "2024-02-19T06:00:00Z", initialFraction: 0.05,
+      cycleMultipliers: [1.1, 1], target: { crossing: "2027-09-20T00:00:00Z" } },
+    cleanings: [{ start: "2025-05-12T06:00:00Z", durationDays: 4, effectiveness: 0.9, method: "bundle pull and hydroblast" }],
+    faults: [], notes: "Asymptotic crude fouling; one cleaning; crosses the threshold about ten months after the data end.",
+  },
+  {
+    tag: "E-1102", name: "Crude / top pumparound exchanger", unitCode: "CDU-1", service: "crude preheat (cold end)",
+    arrangement: ONE_SHELL, tubePasses: 4, areaM2: 380,
+    hotStream: { name: "top pumparound", heatCapacity: CP.naphtha }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 418.15, coldInletK: 318.15, hotFlowKgPerS: 40, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 6_260_000, designUWPerM2K: 360, designFoulingM2KPerW: 0.00035,
+    hotFilmShare: 0.4, coldFilmShare: 0.5, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.4, flowUncertaintyFraction: 0.015, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "linear" }, serviceStart: "2024-04-08T06:00:00Z", initialFraction: 0.03,
+      cycleMultipliers: [1.8, 1], target: { crossing: "2027-02-15T00:00:00Z" } },
+    cleanings: [{ start: "2025-03-03T06:00:00Z", durationDays: 5, effectiveness: 0.85, method: "bundle pull and hydroblast" }],
+    faults: [], notes: "Linear fouling; crosses about two and a half months after the data end.",
+  },
+  {
+    tag: "E-1103", name: "Crude / light gas oil product exchanger", unitCode: "CDU-1", service: "crude preheat",
+    arrangement: ONE_SHELL, tubePasses: 2, areaM2: 190,
+    hotStream: { name: "light gas oil product", heatCapacity: CP.lightGasOil }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 520.15, coldInletK: 335.15, hotFlowKgPerS: 15, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 5_020_000, designUWPerM2K: 320, designFoulingM2KPerW: 0.00053,
+    hotFilmShare: 0.45, coldFilmShare: 0.45, thresholdFraction: 0.83,
+    temperatureUncertaintyK: 0.5, flowUncertaintyFraction: 0.015, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "asymptotic", timeConstantDays: 500 }, serviceStart: "2024-02-05T06:00:00Z", initialFraction: 0.02,
+      cycleMultipliers: [1], target: { crossing: "2027-06-10T00:00:00Z" } },
+    cleanings: [],
+    faults: [], notes: "No cleaning in the data; slow asymptotic fouling crossing about six months after the data end.",
+  },
+  {
+    tag: "E-1104", name: "Crude / kerosene pumparound exchanger", unitCode: "CDU-1", service: "crude preheat (before desalter)",
+    arrangement: ONE_SHELL, tubePasses: 4, areaM2: 320,
+    hotStream: { name: "kerosene pumparound", heatCapacity: CP.kerosene }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 468.15, coldInletK: 352.15, hotFlowKgPerS: 35, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 6_480_000, designUWPerM2K: 380, designFoulingM2KPerW: 0.00035,
+    hotFilmShare: 0.4, coldFilmShare: 0.5, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.4, flowUncertaintyFraction: 0.015, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "linear" }, serviceStart: "2024-01-15T06:00:00Z", initialFraction: 0.04,
+      cycleMultipliers: [1.2, 1, 0.9], target: { crossing: "2027-11-01T00:00:00Z" } },
+    cleanings: [
+      { start: "2025-01-20T06:00:00Z", durationDays: 4, effectiveness: 0.95, method: "bundle pull and hydroblast" },
+      { start: "2026-03-16T06:00:00Z", durationDays: 4, effectiveness: 0.8, method: "chemical clean in place" },
+    ],
+    faults: [], notes: "Two cleanings, the second only 80 % effective; crosses about eleven months after the data end.",
+  },
+  {
+    tag: "E-1105", name: "Crude / heavy gas oil product exchanger", unitCode: "CDU-1", service: "crude preheat (after desalter)",
+    arrangement: ONE_SHELL, tubePasses: 2, areaM2: 150,
+    hotStream: { name: "heavy gas oil product", heatCapacity: CP.heavyGasOil }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 560.15, coldInletK: 398.15, hotFlowKgPerS: 10, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 3_120_000, designUWPerM2K: 300, designFoulingM2KPerW: 0.00053,
+    hotFilmShare: 0.5, coldFilmShare: 0.4, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.5, flowUncertaintyFraction: 0.02, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "asymptotic", timeConstantDays: 150 }, serviceStart: "2024-05-27T06:00:00Z", initialFraction: 0.03,
+      cycleMultipliers: [1, 1], target: { crossing: "2027-01-10T00:00:00Z" } },
+    cleanings: [{ start: "2025-06-02T06:00:00Z", durationDays: 4, effectiveness: 1, method: "bundle pull and hydroblast" }],
+    faults: [
+      { role: "coldOut", kind: "drift", start: "2026-08-10T00:00:00Z", end: null, size: 6, rampDays: 21,
+        description: "Crude outlet thermocouple drifts up 6 K over three weeks and stays offset to the end of the data." },
+    ],
+    notes: "Close to threshold (about six weeks after the data end) while its crude outlet thermocouple drifts high.",
+  },
+  {
+    tag: "E-1106", name: "Crude / diesel pumparound exchanger", unitCode: "CDU-1", service: "crude preheat",
+    arrangement: ONE_SHELL, tubePasses: 4, areaM2: 400,
+    hotStream: { name: "diesel pumparound", heatCapacity: CP.lightGasOil }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 540.15, coldInletK: 410.15, hotFlowKgPerS: 45, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 9_210_000, designUWPerM2K: 380, designFoulingM2KPerW: 0.00053,
+    hotFilmShare: 0.4, coldFilmShare: 0.5, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.4, flowUncertaintyFraction: 0.015, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "linear" }, serviceStart: "2023-12-11T06:00:00Z", initialFraction: 0.05,
+      cycleMultipliers: [1, 1.1, 1], target: { crossing: "2027-05-20T00:00:00Z" } },
+    cleanings: [
+      { start: "2024-11-18T06:00:00Z", durationDays: 5, effectiveness: 0.9, method: "bundle pull and hydroblast" },
+      { start: "2026-01-12T06:00:00Z", durationDays: 5, effectiveness: 0.75, method: "chemical clean in place" },
+    ],
+    faults: [], notes: "Linear fouling, two cleanings; crosses about six months after the data end.",
+  },
+  {
+    tag: "E-1107", name: "Crude / atmospheric residue exchangers E-1107 A/B", unitCode: "CDU-1", service: "crude preheat (hot end)",
+    arrangement: TWO_SHELLS, tubePasses: 2, areaM2: 480,
+    hotStream: { name: "atmospheric residue", heatCapacity: CP.atmosphericResidue }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 620.15, coldInletK: 440.15, hotFlowKgPerS: 32, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 10_800_000, designUWPerM2K: 300, designFoulingM2KPerW: 0.0007,
+    hotFilmShare: 0.5, coldFilmShare: 0.4, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.5, flowUncertaintyFraction: 0.02, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "asymptotic", timeConstantDays: 400 }, serviceStart: "2024-03-04T06:00:00Z", initialFraction: 0.05,
+      cycleMultipliers: [1.1, 1], target: { crossing: "2028-04-15T00:00:00Z" } },
+    cleanings: [{ start: "2025-09-08T06:00:00Z", durationDays: 7, effectiveness: 0.85, method: "bundle pull and hydroblast (both shells)" }],
+    faults: [], notes: "Two shells in series, slow asymptotic fouling; crosses about seventeen months after the data end.",
+  },
+  {
+    tag: "E-1108", name: "Crude / heavy gas oil pumparound exchanger", unitCode: "CDU-1", service: "crude preheat (hot end)",
+    arrangement: ONE_SHELL, tubePasses: 4, areaM2: 320,
+    hotStream: { name: "heavy gas oil pumparound", heatCapacity: CP.heavyGasOil }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 590.15, coldInletK: 462.15, hotFlowKgPerS: 30, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 6_610_000, designUWPerM2K: 340, designFoulingM2KPerW: 0.00053,
+    hotFilmShare: 0.45, coldFilmShare: 0.45, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.5, flowUncertaintyFraction: 0.015, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "linear" }, serviceStart: "2024-06-03T06:00:00Z", initialFraction: 0.02,
+      cycleMultipliers: [1], target: { crossing: "2026-09-25T00:00:00Z" } },
+    cleanings: [],
+    faults: [], notes: "Overdue: passed its threshold about two months before the data end, no cleaning in the data.",
+  },
+  {
+    tag: "E-1109", name: "Crude / atmospheric residue exchangers E-1109 A/B", unitCode: "CDU-1", service: "crude preheat (hot end)",
+    arrangement: TWO_SHELLS, tubePasses: 2, areaM2: 520,
+    hotStream: { name: "atmospheric residue", heatCapacity: CP.atmosphericResidue }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 645.15, coldInletK: 485.15, hotFlowKgPerS: 32, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 9_910_000, designUWPerM2K: 280, designFoulingM2KPerW: 0.0007,
+    hotFilmShare: 0.5, coldFilmShare: 0.4, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.5, flowUncertaintyFraction: 0.02, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "asymptotic", timeConstantDays: 250 }, serviceStart: "2023-10-16T06:00:00Z", initialFraction: 0.05,
+      cycleMultipliers: [1, 1, 1], target: { crossing: "2027-08-15T00:00:00Z" } },
+    cleanings: [
+      { start: "2024-10-14T06:00:00Z", durationDays: 7, effectiveness: 0.9, method: "bundle pull and hydroblast (both shells)" },
+      { start: "2026-04-20T06:00:00Z", durationDays: 7, effectiveness: 0.85, method: "bundle pull and hydroblast (both shells)" },
+    ],
+    faults: [], notes: "Hottest crude service, two cleanings; crosses about eight and a half months after the data end.",
+  },
+  {
+    tag: "E-1110", name: "Crude / vacuum residue exchanger", unitCode: "CDU-1", service: "crude preheat (furnace inlet)",
+    arrangement: ONE_SHELL, tubePasses: 2, areaM2: 300,
+    hotStream: { name: "vacuum residue", heatCapacity: CP.vacuumResidue }, coldStream: CRUDE_STREAM,
+    reference: { hotInletK: 610.15, coldInletK: 505.15, hotFlowKgPerS: 18, coldFlowKgPerS: CRUDE_FLOW },
+    designDutyW: 3_650_000, designUWPerM2K: 260, designFoulingM2KPerW: 0.0007,
+    hotFilmShare: 0.55, coldFilmShare: 0.35, thresholdFraction: 0.82,
+    temperatureUncertaintyK: 0.5, flowUncertaintyFraction: 0.02, hotInletPattern: "column-draw", coldInletPattern: "crude",
+    fouling: { shape: { kind: "linear" }, serviceStart: "2024-03-25T06:00:00Z", initialFraction: 0.03,
+      cycleMultipliers: [1, 1, 0.9, 1], target: { crossing: "2027-03-01T00:00:00Z" } },
+    cleanings: [
+      { start: "2024-12-02T06:00:00Z", durationDays: 4, effectiveness: 0.8, method: "bundle pull and hydroblast" },
+      { start: "2025-08-18T06:00:00Z", durationDays: 4, effectiveness: 0.85, method: "bundle pull and hydroblast" },
+      { start: "2026-05-11T06:00:00Z", durationDays: 4, effectiveness: 0.9, method: "bundle pull and hydroblast" },
+    ],
+    faults: [], notes: "Fast-fouling residue service cleaned three times; crosses about three months after the data end.",
+  },
+];

@@ -3,7 +3,7 @@
 import type { PrismaClient, Prisma } from "../../generated/prisma/client";
 import { demoFleet, simulateDemoFleet } from "../demo";
 import type { ExchangerSpec, SimulationPlan, SimulationResult } from "../core/simulate";
-import type { HeatCapacity } from "../core/thermal";
+import { arrangementToColumns, heatCapacityToColumns } from "./asset-columns";
 import { insertReadings } from "./insert-readings";
 
 export interface SeedResult {
@@ -20,21 +20,6 @@ export interface SeedOptions {
 /** Serialisation lock so two processes never load the demo at the same time. */
 const SEED_LOCK_KEY = 0x466f756c; // "Foul"
 const DAY_MS = 86_400_000;
-
-function arrangementColumns(spec: ExchangerSpec) {
-  const arrangement = spec.arrangement;
-  return {
-    arrangementKind: arrangement.kind,
-    shells: arrangement.kind === "shell-and-tube" ? arrangement.shells : 1,
-    mixedStream: arrangement.kind === "crossflow-mixed" ? arrangement.mixedStream : null,
-  };
-}
-
-function heatCapacityParts(capacity: HeatCapacity): { kind: string; intercept: number; slope: number } {
-  return capacity.kind === "constant"
-    ? { kind: "constant", intercept: capacity.jPerKgK, slope: 0 }
-    : { kind: "linear", intercept: capacity.interceptJPerKgK, slope: capacity.slopeJPerKgK2 };
-}
 
 /** Ground truth kept in the database: plan, faults, cleanings, and one true value per day at 00:00 UTC. */
 function truthRecord(plan: SimulationPlan, result: SimulationResult, thresholdCrossingMs: number | null) {
@@ -69,8 +54,8 @@ async function loadFleet(tx: Prisma.TransactionClient, options: SeedOptions): Pr
   let assets = 0;
   const simulated = simulateDemoFleet(wanted ? { assets: [...wanted] } : undefined);
   for (const { asset: { spec, plan }, result, trueCrossingMs } of simulated) {
-    const hotCp = heatCapacityParts(spec.hotStream.heatCapacity);
-    const coldCp = heatCapacityParts(spec.coldStream.heatCapacity);
+    const hotCp = heatCapacityToColumns(spec.hotStream.heatCapacity);
+    const coldCp = heatCapacityToColumns(spec.coldStream.heatCapacity);
     const unitId = unitIds.get(spec.unitCode);
     if (unitId === undefined) throw new Error(`Demo asset ${spec.tag} names unknown unit ${spec.unitCode}`);
     const created = await tx.asset.create({
@@ -79,17 +64,19 @@ async function loadFleet(tx: Prisma.TransactionClient, options: SeedOptions): Pr
         name: spec.name,
         unitId,
         service: spec.service,
-        ...arrangementColumns(spec),
+        ...arrangementToColumns(spec.arrangement),
         tubePasses: spec.tubePasses,
         areaM2: spec.areaM2,
         hotStreamName: spec.hotStream.name,
         hotCpKind: hotCp.kind,
         hotCpIntercept: hotCp.intercept,
         hotCpSlope: hotCp.slope,
+        hotCpPressurePa: hotCp.pressurePa,
         coldStreamName: spec.coldStream.name,
         coldCpKind: coldCp.kind,
         coldCpIntercept: coldCp.intercept,
         coldCpSlope: coldCp.slope,
+        coldCpPressurePa: coldCp.pressurePa,
         designDutyW: spec.designDutyW,
         designUWPerM2K: spec.designUWPerM2K,
         designFoulingM2KPerW: spec.designFoulingM2KPerW,

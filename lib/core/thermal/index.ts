@@ -36,3 +36,4 @@ export { flowKindFor } from "./flow-kind-for";
 export { rate } from "./rate";
 export { observedU } from "./observed-u";
 export { foulingResistance } from "./fouling-resistance";
+export { maximumDuty } from "./maximum-duty";

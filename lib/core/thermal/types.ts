@@ -4,12 +4,14 @@
  */
 
 /**
- * Specific heat of a stream: constant, or linear in absolute temperature,
- * cp(T) = interceptJPerKgK + slopeJPerKgK2 · T, with T in kelvin.
+ * Specific heat of a stream: constant; linear in absolute temperature,
+ * cp(T) = interceptJPerKgK + slopeJPerKgK2 · T, with T in kelvin; or liquid water at a stated
+ * pressure (IAPWS-IF97 Region 1, see lib/core/fluids).
  */
 export type HeatCapacity =
   | { kind: "constant"; jPerKgK: number }
-  | { kind: "linear"; interceptJPerKgK: number; slopeJPerKgK2: number };
+  | { kind: "linear"; interceptJPerKgK: number; slopeJPerKgK2: number }
+  | { kind: "water"; pressurePa: number };
 
 /**
  * Flow arrangement of an exchanger.

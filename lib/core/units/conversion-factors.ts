@@ -30,3 +30,9 @@ export const KELVIN_AT_ZERO_CELSIUS = 273.15;
 
 /** 0 °F = 459.67 °R exactly (NIST SP 811 B.9: T/K = (t/°F + 459.67)/1.8). */
 export const RANKINE_AT_ZERO_FAHRENHEIT = 459.67;
+
+/** Standard acceleration of gravity, m/s², exact (3rd CGPM 1901; NIST SP 811 (2008) B.8 note). */
+export const STANDARD_GRAVITY_M_PER_S2 = 9.80665;
+
+/** International inch, m, exact (NIST SP 811 (2008) B.8). */
+export const METRES_PER_INCH = 0.0254;

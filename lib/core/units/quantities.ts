@@ -7,7 +7,8 @@ export type Quantity =
   | "heatTransferCoefficient"
   | "foulingResistance"
   | "area"
-  | "specificHeat";
+  | "specificHeat"
+  | "pressure";
 
 export type TemperatureUnit = "degC" | "degF" | "K" | "degR";
 export type TemperatureDifferenceUnit = "K" | "degC" | "degF" | "degR";
@@ -17,6 +18,7 @@ export type HeatTransferCoefficientUnit = "W/(m2.K)" | "Btu/(h.ft2.degF)";
 export type FoulingResistanceUnit = "m2.K/W" | "h.ft2.degF/Btu";
 export type AreaUnit = "m2" | "ft2";
 export type SpecificHeatUnit = "J/(kg.K)" | "kJ/(kg.K)" | "Btu/(lb.degF)";
+export type PressureUnit = "Pa" | "kPa" | "MPa" | "bar" | "psi";
 
 /** The unit ids of each quantity. */
 export interface UnitIdByQuantity {
@@ -28,6 +30,7 @@ export interface UnitIdByQuantity {
   foulingResistance: FoulingResistanceUnit;
   area: AreaUnit;
   specificHeat: SpecificHeatUnit;
+  pressure: PressureUnit;
 }
 
 /** A unit id of quantity Q. */
@@ -43,6 +46,7 @@ export const SI_UNIT: { readonly [Q in Quantity]: UnitOf<Q> } = {
   foulingResistance: "m2.K/W",
   area: "m2",
   specificHeat: "J/(kg.K)",
+  pressure: "Pa",
 };
 
 /** Quantity names for labels and error messages. */
@@ -55,4 +59,5 @@ export const QUANTITY_NAME: { readonly [Q in Quantity]: string } = {
   foulingResistance: "fouling resistance",
   area: "area",
   specificHeat: "specific heat",
+  pressure: "pressure",
 };

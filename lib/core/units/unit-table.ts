@@ -5,8 +5,10 @@ import {
   KILOGRAMS_PER_POUND,
   KILOGRAMS_PER_TONNE,
   METRES_PER_FOOT,
+  METRES_PER_INCH,
   RANKINE_AT_ZERO_FAHRENHEIT,
   SECONDS_PER_HOUR,
+  STANDARD_GRAVITY_M_PER_S2,
 } from "./conversion-factors";
 import type { Quantity, UnitOf } from "./quantities";
 
@@ -40,6 +42,9 @@ const HEAT_TRANSFER_COEFFICIENT_IMPERIAL =
   (WATTS_PER_BTU_PER_HOUR * FAHRENHEIT_DEGREES_PER_KELVIN) / SQUARE_METRES_PER_SQUARE_FOOT;
 /** Btu_IT/(lb·°F) → J/(kg·K) = 4186.8 exactly (NIST SP 811 B.8: 4.1868 E+03). */
 const SPECIFIC_HEAT_IMPERIAL = (JOULES_PER_BTU_IT * FAHRENHEIT_DEGREES_PER_KELVIN) / KILOGRAMS_PER_POUND;
+
+/** Pound-force per square inch → Pa = 0.45359237·9.80665/0.0254² = 6894.757 293 168… (NIST SP 811 B.8: 6.894 757 E+03). */
+const PASCALS_PER_PSI = (KILOGRAMS_PER_POUND * STANDARD_GRAVITY_M_PER_S2) / (METRES_PER_INCH * METRES_PER_INCH);
 
 /** Every supported unit, per quantity, SI unit first. UIs list these; parseUnit accepts their spellings. */
 export const UNIT_TABLE: { readonly [Q in Quantity]: readonly UnitDefinition<UnitOf<Q>>[] } = {
@@ -225,6 +230,14 @@ export const UNIT_TABLE: { readonly [Q in Quantity]: readonly UnitDefinition<Uni
       offset: 0,
       spellings: ["Btu/lb-F", "Btu/lbF", "Btu/lb/F", "Btu/(lb.F)"],
     },
+  ],
+  pressure: [
+    { id: "Pa", label: "Pa", name: "pascal", scale: 1, offset: 0, spellings: ["pascal", "N/m2"], caseSensitive: true },
+    { id: "kPa", label: "kPa", name: "kilopascal", scale: 1e3, offset: 0, spellings: ["kilopascal"], caseSensitive: true },
+    { id: "MPa", label: "MPa", name: "megapascal", scale: 1e6, offset: 0, spellings: ["megapascal"], caseSensitive: true },
+    // 1 bar = 1e5 Pa exactly (NIST SP 811 (2008) B.8)
+    { id: "bar", label: "bar", name: "bar", scale: 1e5, offset: 0, spellings: ["bars"] },
+    { id: "psi", label: "psi", name: "pound-force per square inch", scale: PASCALS_PER_PSI, offset: 0, spellings: ["lbf/in2", "lbf/in^2", "psia", "psid"] },
   ],
 };
 

@@ -67,3 +67,38 @@ describe("meanSpecificHeat", () => {
     expect(meanSpecificHeat(LINEAR, 350, 350)).toBe(1700);
   });
 });
+
+describe("specificHeat and meanSpecificHeat for liquid water", () => {
+  const WATER: HeatCapacity = { kind: "water", pressurePa: 5e5 };
+
+  it("uses IAPWS-IF97 Region 1 at the stated pressure", () => {
+    // FIELD-NOTES §7 [C]: IAPWS-95 via CoolProp, 25 °C, 101.325 kPa: 4181.31 J/(kg K); pressure effect 0.1→0.5 MPa is < 1e-3 (from memory)
+    expect(Math.abs(specificHeat(WATER, 298.15) / 4181.31 - 1)).toBeLessThan(1e-3);
+  });
+
+  it("gives the integral mean, which for nearly flat cp lies between the end values and matches a fine trapezoid sum", () => {
+    const from = 288.15;
+    const to = 318.15;
+    const mean = meanSpecificHeat(WATER, from, to);
+    // composite trapezoid rule with 10,000 panels (computed here as the reference)
+    let sum = 0;
+    const panels = 10_000;
+    for (let index = 0; index <= panels; index += 1) {
+      const weight = index === 0 || index === panels ? 0.5 : 1;
+      sum += weight * specificHeat(WATER, from + ((to - from) * index) / panels);
+    }
+    expect(relativeError(mean, sum / panels)).toBeLessThan(1e-9);
+    expect(meanSpecificHeat(WATER, to, from)).toBeCloseTo(mean, 9);
+  });
+
+  it("refuses water above its saturation temperature at the stated pressure, naming the temperature", () => {
+    // saturation at 0.5 MPa is about 425 K (IAPWS-IF97 Region 4)
+    expect(() => specificHeat(WATER, 430)).toThrow(/water at 430 K is liquid only at or above its saturation pressure/);
+    try {
+      specificHeat(WATER, 430);
+    } catch (error) {
+      expect((error as ThermalInputError).reason).toBe("out-of-range");
+      expect((error as ThermalInputError).quantity).toBe("temperature");
+    }
+  });
+});

@@ -60,6 +60,13 @@ describe("conversion factors", () => {
     expect(Math.abs(factor("specificHeat", "Btu/(lb.degF)") - 4186.8)).toBeLessThanOrEqual(2 * 4186.8 * Number.EPSILON);
   });
 
+  it("convert psi and bar to pascals as NIST SP 811 prints them", () => {
+    // NIST SP 811 (2008) Appendix B.8: pound-force per square inch → Pa 6.894 757 E+03
+    expectMatchesPrinted(factor("pressure", "psi"), 6.894757, 3);
+    // NIST SP 811 (2008) Appendix B.8: bar → Pa 1.0 E+05 (exact)
+    expect(factor("pressure", "bar")).toBe(1e5);
+  });
+
   it("convert ft² to exactly 0.092 903 04 m²", () => {
     // NIST SP 811 (2008) Appendix B.8: ft² → m² 9.290 304 E−02 (exact)
     expect(Math.abs(factor("area", "ft2") - 0.09290304)).toBeLessThanOrEqual(0.09290304 * Number.EPSILON);

@@ -23,6 +23,8 @@ describe("UNIT_TABLE", () => {
     expect(ids("foulingResistance")).toEqual(["m2.K/W", "h.ft2.degF/Btu"]);
     expect(ids("area")).toEqual(["m2", "ft2"]);
     expect(ids("specificHeat")).toEqual(["J/(kg.K)", "kJ/(kg.K)", "Btu/(lb.degF)"]);
+    // pressure (added for water streams and pressure-drop readings): Pa, kPa, MPa, bar, psi
+    expect(ids("pressure")).toEqual(["Pa", "kPa", "MPa", "bar", "psi"]);
   });
 
   it("gives every unit a label and a name, and unique labels per quantity", () => {

@@ -1,0 +1,6 @@
+-- AlterTable
+ALTER TABLE "Asset" ADD COLUMN     "coldCpPressurePa" DOUBLE PRECISION,
+ADD COLUMN     "hotCpPressurePa" DOUBLE PRECISION,
+ALTER COLUMN "hotCpIntercept" SET DEFAULT 0,
+ALTER COLUMN "coldCpIntercept" SET DEFAULT 0;
+

@@ -22,6 +22,7 @@ export default async function FleetPage() {
   return (
     <>
       <h1>Fleet — {site?.siteName}</h1>
+      <p className="actions"><Link href="/assets/new">Register an exchanger</Link></p>
       <p className="subtle">{assets.length} exchangers in {units.length} process units. Latest reading {formatDate(latest, site?.siteTimeZone ?? "UTC")} (site time, {site?.siteTimeZone}).</p>
       <table className="grid" aria-label="Exchangers">
         <thead>

@@ -8,6 +8,7 @@ export async function getAsset(prisma: PrismaClient, tag: string) {
       unit: { include: { site: true } },
       instruments: { orderBy: { role: "asc" } },
       cleanings: { orderBy: { date: "asc" } },
+      demoTruth: { select: { assetId: true } },
     },
   });
 }

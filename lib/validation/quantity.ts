@@ -4,20 +4,25 @@ import { z } from "zod";
 import { parseUnit, toSI, type Quantity, UNIT_TABLE, SI_UNIT } from "../core/units";
 
 export function quantitySchema(quantity: Quantity) {
-  const allowed = UNIT_TABLE[quantity].map((unit) => unit.label).join(", ");
-  return z
-    .union([
-      z.number({ error: `must be a number in ${SI_UNIT[quantity]} or { "value": number, "unit": one of ${allowed} }` }),
-      z.object({ value: z.number({ error: "value must be a number" }), unit: z.string({ error: "unit must be a string" }) }, { error: `must be a number in ${SI_UNIT[quantity]} or { "value": number, "unit": one of ${allowed} }` }).strict(),
-    ])
-    .transform((input, context) => {
-      if (typeof input === "number") return input;
-      try {
-        return toSI(quantity, input.value, parseUnit(quantity, input.unit));
-      } catch (error) {
-        context.addIssue({ code: "custom", message: (error as Error).message });
-        return z.NEVER;
-      }
-    })
-    .refine((value) => Number.isFinite(value), { message: "must be a finite number" });
+  const allowed = UNIT_TABLE[quantity].map((unit) => unit.id).join(", ");
+  const shape = `a number in ${SI_UNIT[quantity]} or { "value": number, "unit": one of ${allowed} }`;
+  return z.unknown().transform((input, context): number => {
+    const fail = (message: string) => {
+      context.addIssue({ code: "custom", message });
+      return z.NEVER;
+    };
+    if (input === undefined || input === null) return fail(`a value is required (${shape})`);
+    if (typeof input === "number") return Number.isFinite(input) ? input : fail("must be a finite number");
+    if (typeof input !== "object" || Array.isArray(input)) return fail(`must be ${shape}`);
+    const { value, unit, ...rest } = input as Record<string, unknown>;
+    if (Object.keys(rest).length > 0) return fail(`unexpected key(s) ${Object.keys(rest).join(", ")}; expected ${shape}`);
+    if (value === undefined || value === null) return fail("a value is required");
+    if (typeof value !== "number" || !Number.isFinite(value)) return fail(`value must be a finite number, got ${JSON.stringify(value)}`);
+    if (typeof unit !== "string") return fail(`unit must be one of ${allowed}`);
+    try {
+      return toSI(quantity, value, parseUnit(quantity, unit));
+    } catch (error) {
+      return fail((error as Error).message);
+    }
+  });
 }

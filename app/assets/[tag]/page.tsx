@@ -4,6 +4,7 @@ import { AdvisoryCaution } from "@/app/_components/advisory-caution";
 import { DailyTemperatureChart } from "@/app/_components/daily-temperature-chart";
 import { dailyReadings } from "@/lib/data/daily-readings";
 import { getAsset } from "@/lib/data/get-asset";
+import { listAssetRevisions } from "@/lib/data/list-asset-revisions";
 import { getPrisma } from "@/lib/db";
 import { describeArrangement, formatDate, formatDutyMW, formatSignificant, formatTemperatureC } from "@/lib/present/format";
 
@@ -16,6 +17,8 @@ const ROLE_LABELS: Record<string, string> = {
   coldOut: "Cold outlet temperature",
   hotFlow: "Hot mass flow",
   coldFlow: "Cold mass flow",
+  hotPressureDrop: "Hot side pressure drop",
+  coldPressureDrop: "Cold side pressure drop",
 };
 
 function describeHeatCapacity(kind: string, intercept: number, slope: number): string {
@@ -24,17 +27,31 @@ function describeHeatCapacity(kind: string, intercept: number, slope: number): s
     : `cp = ${formatSignificant(intercept, 4)} J/(kg·K)`;
 }
 
-export default async function AssetPage({ params }: { params: Promise<{ tag: string }> }) {
+const ROLE_ORDER = Object.keys(ROLE_LABELS);
+
+function describeChange(field: string, change: { before: unknown; after: unknown }): string {
+  const show = (value: unknown) => (typeof value === "number" ? formatSignificant(value, 6) : value === null ? "—" : typeof value === "object" ? "(list)" : String(value));
+  return field === "instruments" ? "instruments changed" : `${field}: ${show(change.before)} → ${show(change.after)}`;
+}
+
+export default async function AssetPage({ params, searchParams }: { params: Promise<{ tag: string }>; searchParams: Promise<{ saved?: string }> }) {
   const { tag } = await params;
+  const { saved } = await searchParams;
   const prisma = getPrisma();
   const asset = await getAsset(prisma, decodeURIComponent(tag));
   if (!asset) notFound();
-  const daily = await dailyReadings(prisma, asset.id);
+  const [daily, revisions] = await Promise.all([dailyReadings(prisma, asset.id), listAssetRevisions(prisma, asset.tag)]);
+  const instruments = [...asset.instruments].sort((a, b) => ROLE_ORDER.indexOf(a.role) - ROLE_ORDER.indexOf(b.role));
   const timeZone = asset.unit.site.timeZone;
   return (
     <>
       <p className="subtle"><Link href="/">Fleet</Link> / {asset.unit.name}</p>
       <h1>{asset.tag} — {asset.name}</h1>
+      {saved ? <p className="notice" role="status">Changes saved.</p> : null}
+      <p className="actions">
+        <Link href={`/assets/${encodeURIComponent(asset.tag)}/edit`}>Edit register entry</Link>
+        <Link href={`/assets/${encodeURIComponent(asset.tag)}/import`}>Import operating data</Link>
+      </p>
       <div className="columns">
         <section className="panel" aria-labelledby="design-heading">
           <h2 id="design-heading">Design</h2>
@@ -62,11 +79,11 @@ export default async function AssetPage({ params }: { params: Promise<{ tag: str
           <table className="grid">
             <thead><tr><th scope="col">Measurement</th><th scope="col">Tag</th><th scope="col" className="num">Standard uncertainty</th></tr></thead>
             <tbody>
-              {asset.instruments.map((instrument) => (
+              {instruments.map((instrument) => (
                 <tr key={instrument.id}>
                   <td>{ROLE_LABELS[instrument.role] ?? instrument.role}</td>
                   <td>{instrument.tag}</td>
-                  <td className="num">{formatSignificant(instrument.standardUncertainty, 2)} {instrument.role.endsWith("Flow") ? "kg/s" : "K"}</td>
+                  <td className="num">{formatSignificant(instrument.standardUncertainty, 2)} {instrument.role.endsWith("Flow") ? "kg/s" : instrument.role.endsWith("PressureDrop") ? "Pa" : "K"}</td>
                 </tr>
               ))}
             </tbody>
@@ -86,6 +103,23 @@ export default async function AssetPage({ params }: { params: Promise<{ tag: str
           <tbody>
             {asset.cleanings.map((cleaning) => (
               <tr key={cleaning.id}><td>{formatDate(cleaning.date.toISOString(), timeZone)}</td><td>{cleaning.method}</td><td>{cleaning.notes}</td></tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      <h2>Register history</h2>
+      {revisions === null || revisions.length === 0 ? (
+        <p className="subtle">No recorded changes{asset.demoTruth ? " (loaded as demo data)" : ""}.</p>
+      ) : (
+        <table className="grid">
+          <thead><tr><th scope="col">When</th><th scope="col">Who</th><th scope="col">What</th></tr></thead>
+          <tbody>
+            {revisions.map((revision) => (
+              <tr key={revision.changedAt + revision.action}>
+                <td>{revision.changedAt.replace("T", " ").slice(0, 16)} UTC</td>
+                <td>{revision.changedBy}</td>
+                <td>{revision.action === "created" ? "Created" : Object.entries(revision.changes).map(([field, change]) => describeChange(field, change)).join("; ")}</td>
+              </tr>
             ))}
           </tbody>
         </table>

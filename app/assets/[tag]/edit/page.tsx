@@ -1,0 +1,23 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { AssetForm, type AssetDraft } from "@/app/_components/asset-form";
+import { exportAssetFile } from "@/lib/data/export-asset-file";
+import { getPrisma } from "@/lib/db";
+
+export const dynamic = "force-dynamic";
+
+export default async function EditAssetPage({ params }: { params: Promise<{ tag: string }> }) {
+  const tag = decodeURIComponent((await params).tag);
+  const file = await exportAssetFile(getPrisma(), tag);
+  if (!file) notFound();
+  // The exported file is already in the form's shape (quantities as { value, unit }).
+  const draft = { ...file, instruments: file.instruments ?? [], economics: file.economics ?? {}, notes: file.notes ?? "" } as unknown as AssetDraft;
+  return (
+    <>
+      <p className="subtle"><Link href="/">Fleet</Link> / <Link href={`/assets/${encodeURIComponent(tag)}`}>{tag}</Link> / Edit</p>
+      <h1>Edit {tag}</h1>
+      <p className="subtle">Changes are recorded in the asset&apos;s history with the values before and after.</p>
+      <AssetForm mode="update" initial={draft} />
+    </>
+  );
+}

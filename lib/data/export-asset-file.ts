@@ -2,24 +2,24 @@
 // it can be saved, edited and loaded back with `asset update`.
 import type { PrismaClient } from "../../generated/prisma/client";
 import { fromSI } from "../core/units";
-import type { AssetFileInput, InstrumentRoleName } from "../validation/asset";
+import type { AssetFileDocument, HeatCapacityDocument } from "../validation/asset-document";
 import { arrangementFromColumns } from "./asset-columns";
 
 const round = (value: number, digits = 10) => Number(value.toPrecision(digits));
 const celsius = (kelvin: number) => ({ value: round(fromSI("temperature", kelvin, "degC")), unit: "degC" });
 const money = (value: number | null) => (value === null ? undefined : value / 100);
 
-export async function exportAssetFile(prisma: PrismaClient, tag: string): Promise<AssetFileInput | null> {
+export async function exportAssetFile(prisma: PrismaClient, tag: string): Promise<AssetFileDocument | null> {
   const asset = await prisma.asset.findUnique({ where: { tag }, include: { unit: { include: { site: true } }, instruments: { orderBy: { role: "asc" } } } });
   if (!asset) return null;
   const arrangement = arrangementFromColumns(asset);
-  const heatCapacity = (kind: string, intercept: number, slope: number, pressurePa: number | null) =>
+  const heatCapacity = (kind: string, intercept: number, slope: number, pressurePa: number | null): HeatCapacityDocument =>
     kind === "water"
-      ? { kind: "water" as const, pressure: { value: round((pressurePa ?? 0) / 1e3), unit: "kPa" } }
+      ? { kind: "water", pressure: { value: round((pressurePa ?? 0) / 1e3), unit: "kPa" } }
       : kind === "linear"
-        ? { kind: "linear" as const, interceptJPerKgK: intercept, slopeJPerKgK2: slope }
-        : { kind: "constant" as const, value: { value: intercept, unit: "J/(kg.K)" } };
-  const economics = Object.fromEntries(
+        ? { kind: "linear", interceptJPerKgK: intercept, slopeJPerKgK2: slope }
+        : { kind: "constant", value: { value: intercept, unit: "J/(kg.K)" } };
+  const economics: Record<string, number> = Object.fromEntries(
     Object.entries({
       fuelPricePerGJ: money(asset.fuelPriceCentsPerGJ),
       furnaceEfficiency: asset.furnaceEfficiency ?? undefined,
@@ -28,7 +28,7 @@ export async function exportAssetFile(prisma: PrismaClient, tag: string): Promis
       cleaningCost: money(asset.cleaningCostCents),
       cleaningOutageDays: asset.cleaningOutageDays ?? undefined,
       lostProductionPerDay: money(asset.lostProductionCentsPerDay),
-    }).filter(([, value]) => value !== undefined),
+    }).filter((entry): entry is [string, number] => entry[1] !== undefined),
   );
   return {
     tag: asset.tag,
@@ -59,7 +59,7 @@ export async function exportAssetFile(prisma: PrismaClient, tag: string): Promis
       ? { minimumOutlet: { stream: asset.minimumOutletStream, temperature: celsius(asset.minimumOutletK) } }
       : {}),
     instruments: asset.instruments.map((instrument) => ({
-      role: instrument.role as InstrumentRoleName,
+      role: instrument.role,
       tag: instrument.tag,
       uncertainty: instrument.standardUncertainty,
     })),

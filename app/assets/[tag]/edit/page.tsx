@@ -10,8 +10,8 @@ export default async function EditAssetPage({ params }: { params: Promise<{ tag:
   const tag = decodeURIComponent((await params).tag);
   const file = await exportAssetFile(getPrisma(), tag);
   if (!file) notFound();
-  // The exported file is already in the form's shape (quantities as { value, unit }).
-  const draft = { ...file, instruments: file.instruments ?? [], economics: file.economics ?? {}, notes: file.notes ?? "" } as unknown as AssetDraft;
+  // The exported document is already in the form's shape (quantities as { value, unit }).
+  const draft: AssetDraft = file;
   return (
     <>
       <p className="subtle"><Link href="/">Fleet</Link> / <Link href={`/assets/${encodeURIComponent(tag)}`}>{tag}</Link> / Edit</p>

@@ -36,6 +36,7 @@ export default async function FleetPage() {
             <th scope="col" className="num">Design U (W/m²K)</th>
             <th scope="col" className="num">Readings</th>
             <th scope="col">Last cleaning</th>
+            <th scope="col" className="num">Open alerts</th>
           </tr>
         </thead>
         <tbody>
@@ -43,7 +44,7 @@ export default async function FleetPage() {
             const inUnit = assets.filter((asset) => asset.unitCode === unitCode);
             return [
               <tr key={`unit-${unitCode}`} className="unit-row">
-                <td colSpan={9}>{unitCode} — {inUnit[0]?.unitName}</td>
+                <td colSpan={10}>{unitCode} — {inUnit[0]?.unitName}</td>
               </tr>,
               ...inUnit.map((asset) => (
                 <tr key={asset.tag}>
@@ -56,6 +57,7 @@ export default async function FleetPage() {
                   <td className="num">{formatSignificant(asset.designUWPerM2K, 3)}</td>
                   <td className="num">{asset.readingCount.toLocaleString("en-US")}</td>
                   <td>{formatDate(asset.lastCleaning, asset.siteTimeZone)}</td>
+                  <td className="num">{asset.openAlerts ? <Link href={`/assets/${encodeURIComponent(asset.tag)}#alerts`} className="alert-count">{asset.openAlerts}</Link> : "—"}</td>
                 </tr>
               )),
             ];

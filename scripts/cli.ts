@@ -1,9 +1,13 @@
 // Foulcast command line for batch work: `npm run cli -- <command> [options]`.
 // Each group of commands registers itself from scripts/cli/.
 import { Command, CommanderError } from "commander";
+import { registerAssessCommands } from "./cli/assess-commands";
 import { registerAssetCommands } from "./cli/asset-commands";
+import { registerCleaningCommands } from "./cli/cleaning-commands";
 import { UsageError } from "./cli/context";
 import { registerDatabaseCommands } from "./cli/database-commands";
+import { registerImportCommands } from "./cli/import-commands";
+import { registerQualityCommands } from "./cli/quality-commands";
 
 const program = new Command()
   .name("npm run cli --")
@@ -13,6 +17,10 @@ const program = new Command()
 
 registerDatabaseCommands(program);
 registerAssetCommands(program);
+registerImportCommands(program);
+registerQualityCommands(program);
+registerAssessCommands(program);
+registerCleaningCommands(program);
 
 try {
   await program.parseAsync(process.argv);

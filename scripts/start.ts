@@ -6,6 +6,7 @@ import exitHook from "async-exit-hook";
 import { spawn, type ChildProcess } from "node:child_process";
 import { prepareDatabase } from "../lib/database/prepare-database";
 import { seedDemoFleetIfEmpty } from "../lib/data/seed-demo-fleet";
+import { refreshFleet } from "../lib/data/refresh-fleet";
 import { disconnectPrisma, getPrisma } from "../lib/db";
 
 const dev = process.argv.includes("--dev");
@@ -51,7 +52,10 @@ setInterval(() => {
 
 if (database.migrations.applied.length > 0) log(`Applied migrations: ${database.migrations.applied.join(", ")}`);
 const seeded = await seedDemoFleetIfEmpty(getPrisma(), { log });
-if (seeded) log(`Loaded the demo fleet: ${seeded.assets} exchangers, ${seeded.readings} readings.`);
+if (seeded) {
+  log(`Loaded the demo fleet: ${seeded.assets} exchangers, ${seeded.readings} readings. Screening the data...`);
+  await refreshFleet(getPrisma(), { log });
+}
 await disconnectPrisma();
 
 const env = { ...process.env, DATABASE_URL: database.url, NEXT_TELEMETRY_DISABLED: "1" };

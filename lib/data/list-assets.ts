@@ -19,6 +19,7 @@ export interface AssetListRow {
   firstReading: string | null;
   lastReading: string | null;
   lastCleaning: string | null;
+  openAlerts: number;
 }
 
 /** Every asset with its place in the site hierarchy and a summary of its data. */
@@ -34,6 +35,8 @@ export async function listAssets(prisma: PrismaClient): Promise<AssetListRow[]> 
     _max: { time: true },
   });
   const cleaningStats = await prisma.cleaning.groupBy({ by: ["assetId"], _max: { date: true } });
+  const alertStats = await prisma.instrumentAlert.groupBy({ by: ["assetId"], where: { acknowledgedAt: null }, _count: { _all: true } });
+  const alertsByAsset = new Map(alertStats.map((row) => [row.assetId, row._count._all]));
   const readingsByAsset = new Map(readingStats.map((row) => [row.assetId, row]));
   const cleaningByAsset = new Map(cleaningStats.map((row) => [row.assetId, row._max.date]));
   return assets.map((asset) => {
@@ -57,6 +60,7 @@ export async function listAssets(prisma: PrismaClient): Promise<AssetListRow[]> 
       firstReading: stats?._min.time?.toISOString() ?? null,
       lastReading: stats?._max.time?.toISOString() ?? null,
       lastCleaning: cleaningByAsset.get(asset.id)?.toISOString() ?? null,
+      openAlerts: alertsByAsset.get(asset.id) ?? 0,
     };
   });
 }

@@ -21,6 +21,14 @@ export interface SeedOptions {
 const SEED_LOCK_KEY = 0x466f756c; // "Foul"
 const DAY_MS = 86_400_000;
 
+/**
+ * Invented cost of a demo cleaning: a fixed mobilisation part plus a part growing with area
+ * (EUR 15,000 + 60 per m², in cents; demo data only, not a check value).
+ */
+function demoCleaningCostCents(areaM2: number): number {
+  return Math.round((15_000 + 60 * areaM2) * 100);
+}
+
 /** Ground truth kept in the database: plan, faults, cleanings, and one true value per day at 00:00 UTC. */
 function truthRecord(plan: SimulationPlan, result: SimulationResult, thresholdCrossingMs: number | null) {
   const daily = result.truth.filter((point) => point.timeMs % DAY_MS === 0);
@@ -89,8 +97,11 @@ async function loadFleet(tx: Prisma.TransactionClient, options: SeedOptions): Pr
         cleanings: {
           create: result.cleanings.map((cleaning) => ({
             date: new Date(cleaning.startMs),
+            endDate: new Date(cleaning.endMs),
             method: cleaning.method,
+            costCents: demoCleaningCostCents(spec.areaM2),
             notes: "Demo record",
+            createdBy: "demo",
           })),
         },
         demoTruth: { create: { truth: truthRecord(plan, result, trueCrossingMs) as unknown as Prisma.InputJsonValue } },

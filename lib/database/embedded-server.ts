@@ -183,8 +183,10 @@ export async function ensureEmbeddedServer(settings: EmbeddedSettings, options: 
           const others = await otherClientCount(settings.port);
           if (others === null) return false;
           if (others > 0) {
-            if (server) detach(server);
-            log(`Embedded PostgreSQL left running: ${others} other connection(s) still use it.`);
+            if (server) {
+              detach(server);
+              log(`Embedded PostgreSQL left running: ${others} other connection(s) still use it.`);
+            }
             return false;
           }
           if (server) await server.stop();

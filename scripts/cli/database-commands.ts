@@ -1,6 +1,7 @@
 // Database set-up commands: migrate, seed-demo, reset-demo, status.
 import type { Command } from "commander";
 import { databaseStatus } from "../../lib/data/database-status";
+import { refreshFleet } from "../../lib/data/refresh-fleet";
 import { resetDemoFleet, seedDemoFleetIfEmpty } from "../../lib/data/seed-demo-fleet";
 import { getPrisma } from "../../lib/db";
 import { log, printJson, target, withDatabase } from "./context";
@@ -22,6 +23,7 @@ export function registerDatabaseCommands(program: Command): void {
     .action(async () => {
       await withDatabase(async () => {
         const result = await seedDemoFleetIfEmpty(getPrisma(), { log });
+        if (result) await refreshFleet(getPrisma(), { log });
         console.log(result ? `Loaded the demo fleet: ${result.assets} exchangers, ${result.readings} readings.` : "The database already holds assets; nothing loaded (use reset-demo to start over).");
       });
     });
@@ -33,6 +35,7 @@ export function registerDatabaseCommands(program: Command): void {
     .action(async () => {
       await withDatabase(async () => {
         const result = await resetDemoFleet(getPrisma(), { log });
+        await refreshFleet(getPrisma(), { log });
         console.log(`Reset done: ${result.assets} exchangers, ${result.readings} readings.`);
       });
     });

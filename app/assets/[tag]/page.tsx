@@ -5,6 +5,14 @@ import { DailyTemperatureChart } from "@/app/_components/daily-temperature-chart
 import { dailyReadings } from "@/lib/data/daily-readings";
 import { getAsset } from "@/lib/data/get-asset";
 import { listAssetRevisions } from "@/lib/data/list-asset-revisions";
+import { listAlerts } from "@/lib/data/list-alerts";
+import { listPeriods } from "@/lib/data/list-periods";
+import { ClosureChart } from "@/app/_components/closure-chart";
+import { acknowledgeAlertAction } from "./alert-actions";
+import { recordCleaningAction } from "./cleaning-actions";
+import { FoulingChart } from "@/app/_components/fouling-chart";
+import { getStoredAssessment } from "@/lib/data/refresh-assessment";
+import type { Assessment } from "@/lib/core/assessment";
 import { getPrisma } from "@/lib/db";
 import { describeArrangement, formatDate, formatDutyMW, formatSignificant, formatTemperatureC } from "@/lib/present/format";
 
@@ -29,18 +37,41 @@ function describeHeatCapacity(kind: string, intercept: number, slope: number): s
 
 const ROLE_ORDER = Object.keys(ROLE_LABELS);
 
+/** Forecast band shown on the chart: up to 60 days past the P90 duty crossing, at least one year, at most the horizon. */
+function chartBand(assessment: Assessment) {
+  const band = assessment.trend?.band ?? [];
+  const p90 = assessment.forecasts.duty.p90Ms;
+  const until = Math.max(assessment.asOfMs + 365 * 86_400_000, (p90 ?? 0) + 60 * 86_400_000);
+  return band.filter((point) => point.timeMs <= until);
+}
+
 function describeChange(field: string, change: { before: unknown; after: unknown }): string {
   const show = (value: unknown) => (typeof value === "number" ? formatSignificant(value, 6) : value === null ? "—" : typeof value === "object" ? "(list)" : String(value));
   return field === "instruments" ? "instruments changed" : `${field}: ${show(change.before)} → ${show(change.after)}`;
 }
 
-export default async function AssetPage({ params, searchParams }: { params: Promise<{ tag: string }>; searchParams: Promise<{ saved?: string }> }) {
+export default async function AssetPage({ params, searchParams }: { params: Promise<{ tag: string }>; searchParams: Promise<{ saved?: string; error?: string }> }) {
   const { tag } = await params;
-  const { saved } = await searchParams;
+  const { saved, error } = await searchParams;
   const prisma = getPrisma();
   const asset = await getAsset(prisma, decodeURIComponent(tag));
   if (!asset) notFound();
-  const [daily, revisions] = await Promise.all([dailyReadings(prisma, asset.id), listAssetRevisions(prisma, asset.tag)]);
+  const [daily, revisions, alerts, periods] = await Promise.all([
+    dailyReadings(prisma, asset.id),
+    listAssetRevisions(prisma, asset.tag),
+    listAlerts(prisma, { tag: asset.tag, includeAcknowledged: true }),
+    listPeriods(prisma, asset.id),
+  ]);
+  const stored = await getStoredAssessment(prisma, asset.tag);
+  const assessment = stored?.assessment ?? null;
+  const openAlerts = alerts.filter((alert) => alert.acknowledgedAt === null);
+  const lastPeriodMs = periods.length ? Date.parse(periods[periods.length - 1]?.start ?? "") + 86_400_000 : Date.now();
+  const excludedTotals = periods.reduce<Record<string, number>>((totals, period) => {
+    for (const [reason, count] of Object.entries(period.excluded)) totals[reason] = (totals[reason] ?? 0) + count;
+    return totals;
+  }, {});
+  const samplesTotal = periods.reduce((sum, period) => sum + period.samplesTotal, 0);
+  const samplesUsed = periods.reduce((sum, period) => sum + period.samplesUsed, 0);
   const instruments = [...asset.instruments].sort((a, b) => ROLE_ORDER.indexOf(a.role) - ROLE_ORDER.indexOf(b.role));
   const timeZone = asset.unit.site.timeZone;
   return (
@@ -48,6 +79,7 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
       <p className="subtle"><Link href="/">Fleet</Link> / {asset.unit.name}</p>
       <h1>{asset.tag} — {asset.name}</h1>
       {saved ? <p className="notice" role="status">Changes saved.</p> : null}
+      {error ? <p className="form-errors" role="alert">Not saved: {error}</p> : null}
       <p className="actions">
         <Link href={`/assets/${encodeURIComponent(asset.tag)}/edit`}>Edit register entry</Link>
         <Link href={`/assets/${encodeURIComponent(asset.tag)}/import`}>Import operating data</Link>
@@ -90,6 +122,137 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
           </table>
         </section>
       </div>
+      <h2>Fouling assessment</h2>
+      {assessment === null ? (
+        <p className="subtle">Not assessed yet: no usable screened data.</p>
+      ) : (
+        <>
+          <div className="columns">
+            <section className="panel" aria-labelledby="condition-heading">
+              <h3 id="condition-heading">Condition as of {formatDate(assessment.asOf, timeZone)}</h3>
+              <dl className="facts">
+                <dt>Observed U</dt><dd>{assessment.currentObservedU ? `${formatSignificant(assessment.currentObservedU.uWPerM2K, 3)} W/(m²·K), ${formatSignificant(assessment.currentObservedU.percentOfClean, 3)} % of clean` : "—"}</dd>
+                <dt>Fouling resistance</dt><dd>{assessment.foulingResistance.current === null ? "—" : `${formatSignificant(assessment.foulingResistance.current, 3)} m²·K/W`}</dd>
+                <dt>Duty at reference</dt><dd>{assessment.referenceDuty.currentW === null ? "—" : `${formatDutyMW(assessment.referenceDuty.currentW)} (clean ${formatDutyMW(assessment.referenceDuty.cleanW)})`}</dd>
+                <dt>Duty loss</dt><dd>{assessment.referenceDuty.lossW === null ? "—" : `${formatSignificant(assessment.referenceDuty.lossW / 1e3, 3)} kW`}</dd>
+                <dt>Energy lost this cycle</dt><dd>{assessment.referenceDuty.lossEnergyJ === null ? "—" : `${formatSignificant(assessment.referenceDuty.lossEnergyJ / 3.6e9, 3)} MWh`}</dd>
+              </dl>
+            </section>
+            <section className="panel" aria-labelledby="forecast-heading">
+              <h3 id="forecast-heading">Forecast (P10 / P50 / P90)</h3>
+              <table className="grid">
+                <thead><tr><th scope="col">Limit</th><th scope="col">Status</th><th scope="col">P10</th><th scope="col">P50</th><th scope="col">P90</th></tr></thead>
+                <tbody>
+                  {([["Duty below threshold", assessment.forecasts.duty], ["Design fouling reached", assessment.forecasts.foulingAllowance], ...(assessment.forecasts.minimumOutlet ? [["Outlet temperature limit", assessment.forecasts.minimumOutlet] as const] : [])] as const).map(([label, forecast]) => (
+                    <tr key={label}>
+                      <td>{label}</td>
+                      <td>{forecast.status === "already-crossed" ? `crossed ${formatDate(forecast.crossedAt, timeZone)}` : forecast.status.replaceAll("-", " ")}</td>
+                      <td>{formatDate(forecast.p10, timeZone)}</td>
+                      <td>{formatDate(forecast.p50, timeZone)}</td>
+                      <td>{formatDate(forecast.p90, timeZone)}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+              <p className="subtle">P10 is the early date: a 10 % chance the limit is reached by then.</p>
+            </section>
+            <section className="panel" aria-labelledby="model-heading">
+              <h3 id="model-heading">Model card</h3>
+              {assessment.cleanModel ? (
+                <table className="grid">
+                  <thead><tr><th scope="col">Clean-U parameter</th><th scope="col" className="num">Estimate</th><th scope="col" className="num">Std. error</th></tr></thead>
+                  <tbody>
+                    {([
+                      ["Hot film resistance at ref. flow (m²·K/W)", assessment.cleanModel.parameters.hotFilmResistanceRefM2KPerW, assessment.cleanModel.standardErrors.hotFilm],
+                      ["Cold film resistance at ref. flow (m²·K/W)", assessment.cleanModel.parameters.coldFilmResistanceRefM2KPerW, assessment.cleanModel.standardErrors.coldFilm],
+                      ["Wall resistance (m²·K/W)", assessment.cleanModel.parameters.wallResistanceM2KPerW, assessment.cleanModel.standardErrors.wall],
+                      ["Hot flow exponent", assessment.cleanModel.parameters.exponentHot, assessment.cleanModel.standardErrors.exponentHot],
+                      ["Cold flow exponent", assessment.cleanModel.parameters.exponentCold, assessment.cleanModel.standardErrors.exponentCold],
+                    ] as const).map(([label, value, error]) => (
+                      <tr key={label}><td>{label}</td><td className="num">{formatSignificant(value, 3)}</td><td className="num">{error === null ? "fixed" : formatSignificant(error, 2)}</td></tr>
+                    ))}
+                  </tbody>
+                </table>
+              ) : <p className="subtle">No clean-U model could be fitted.</p>}
+              <dl className="facts">
+                <dt>Clean U at reference</dt><dd>{assessment.cleanModel ? `${formatSignificant(assessment.cleanModel.cleanUAtReferenceWPerM2K, 3)} W/(m²·K)` : "—"}</dd>
+                <dt>Fit (estimation / validation)</dt><dd>{assessment.cleanModel ? `${formatSignificant(assessment.cleanModel.fitPercent.estimation ?? Number.NaN, 3)} % / ${formatSignificant(assessment.cleanModel.fitPercent.validation ?? Number.NaN, 3)} %` : "—"}</dd>
+                <dt>Trend model</dt><dd>{assessment.trend ? `${assessment.trend.model}: ${assessment.trend.reason}${assessment.trend.priorUsed ? ` Prior from cycles ${assessment.trend.priorUsed.sourceCycles.join(", ")}.` : ""}` : "—"}</dd>
+                <dt>Data used</dt><dd>{periods.filter((period) => period.usable).length} usable days of {periods.length}</dd>
+              </dl>
+              {assessment.notes.length ? <ul className="subtle">{assessment.notes.map((note) => <li key={note}>{note}</li>)}</ul> : null}
+            </section>
+          </div>
+          <div className="panel">
+            <FoulingChart
+              data={{
+                observed: assessment.foulingResistance.series.map((point) => ({ timeMs: point.timeMs, rf: point.foulingM2KPerW, cycle: point.cycle })),
+                band: chartBand(assessment),
+                criticalRf: assessment.forecasts.duty.criticalFoulingM2KPerW,
+                designRf: asset.designFoulingM2KPerW,
+                asOfMs: assessment.asOfMs,
+              }}
+            />
+          </div>
+        </>
+      )}
+
+      <h2 id="alerts">Instrument alerts</h2>
+      {alerts.length === 0 ? (
+        <p className="subtle">No instrument problems found in the data.</p>
+      ) : (
+        <table className="grid" aria-label="Instrument alerts">
+          <thead>
+            <tr><th scope="col">Instrument</th><th scope="col">Problem</th><th scope="col">From</th><th scope="col">To</th><th scope="col" className="num">Size</th><th scope="col">Evidence</th><th scope="col">Status</th></tr>
+          </thead>
+          <tbody>
+            {alerts.map((alert) => (
+              <tr key={alert.id}>
+                <td>{alert.instrumentTag}<br /><span className="subtle">{ROLE_LABELS[alert.role] ?? alert.role}</span></td>
+                <td>{alert.kind}</td>
+                <td>{formatDate(alert.start, timeZone)}</td>
+                <td>{alert.end ? formatDate(alert.end, timeZone) : "still present"}</td>
+                <td className="num">{alert.sizeUnit === "fraction" ? `${formatSignificant(alert.size * 100, 2)} %` : `${formatSignificant(alert.size, 3)} ${alert.sizeUnit}`}</td>
+                <td className="evidence">{alert.evidence}</td>
+                <td>
+                  {alert.acknowledgedAt ? (
+                    <span className="subtle">Acknowledged by {alert.acknowledgedBy} {formatDate(alert.acknowledgedAt, timeZone)}{alert.note ? `: ${alert.note}` : ""}</span>
+                  ) : (
+                    <form action={acknowledgeAlertAction}>
+                      <input type="hidden" name="alertId" value={alert.id} />
+                      <input type="hidden" name="tag" value={asset.tag} />
+                      <label className="visually-hidden" htmlFor={`note-${alert.id}`}>Note</label>
+                      <input id={`note-${alert.id}`} name="note" placeholder="Note (optional)" />
+                      <button type="submit">Acknowledge</button>
+                    </form>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      <p className="subtle">Periods affected by an alert stay excluded from U estimation, acknowledged or not.{openAlerts.length ? ` ${openAlerts.length} open.` : ""}</p>
+
+      <h2>Data quality: heat-balance closure per day</h2>
+      <div className="panel">
+        {periods.length === 0 ? (
+          <p className="empty">No screened data yet.</p>
+        ) : (
+          <>
+            <p className="subtle">
+              {periods.filter((period) => period.usable).length} of {periods.length} days usable; samples used {samplesUsed.toLocaleString("en-US")} of {samplesTotal.toLocaleString("en-US")}
+              {" "}(not used: {Object.entries(excludedTotals).map(([reason, count]) => `${reason} ${count.toLocaleString("en-US")}`).join(", ")}). Closure = (hot duty − cold duty)/mean duty; shaded spans are instrument alerts.
+            </p>
+            <ClosureChart
+              endMs={lastPeriodMs}
+              points={periods.filter((period) => period.closure !== null).map((period) => ({ timeMs: Date.parse(period.start), closurePercent: (period.closure ?? 0) * 100, usable: period.usable }))}
+              alerts={alerts.map((alert) => ({ id: alert.id, label: `${alert.instrumentTag} ${alert.kind}`, startMs: Date.parse(alert.start), endMs: alert.end ? Date.parse(alert.end) : lastPeriodMs }))}
+            />
+          </>
+        )}
+      </div>
+
       <h2>Daily mean temperatures (raw readings, unscreened)</h2>
       <div className="panel">
         {daily.length === 0 ? <p className="empty">No operating data imported yet.</p> : <DailyTemperatureChart data={daily} />}
@@ -99,14 +262,33 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
         <p className="subtle">No cleanings recorded.</p>
       ) : (
         <table className="grid">
-          <thead><tr><th scope="col">Date</th><th scope="col">Method</th><th scope="col">Notes</th></tr></thead>
+          <thead><tr><th scope="col">Out of service</th><th scope="col">Back in service</th><th scope="col">Method</th><th scope="col" className="num">Cost ({asset.unit.site.currency})</th><th scope="col" className="num">Fouling removed</th><th scope="col">Notes</th></tr></thead>
           <tbody>
             {asset.cleanings.map((cleaning) => (
-              <tr key={cleaning.id}><td>{formatDate(cleaning.date.toISOString(), timeZone)}</td><td>{cleaning.method}</td><td>{cleaning.notes}</td></tr>
+              <tr key={cleaning.id}>
+                <td>{formatDate(cleaning.date.toISOString(), timeZone)}</td>
+                <td>{formatDate(cleaning.endDate?.toISOString() ?? null, timeZone)}</td>
+                <td>{cleaning.method}</td>
+                <td className="num">{cleaning.costCents === null ? "—" : (cleaning.costCents / 100).toLocaleString("en-US")}</td>
+                <td className="num">{cleaning.effectiveness === null ? "—" : `${formatSignificant(cleaning.effectiveness * 100, 2)} %`}</td>
+                <td>{cleaning.notes}</td>
+              </tr>
             ))}
           </tbody>
         </table>
       )}
+      <details className="panel">
+        <summary>Record a cleaning</summary>
+        <form action={recordCleaningAction} className="inline-form">
+          <input type="hidden" name="tag" value={asset.tag} />
+          <label>Out of service <input type="date" name="date" required /></label>
+          <label>Back in service <input type="date" name="endDate" /></label>
+          <label>Method <input name="method" required placeholder="hydroblast" /></label>
+          <label>Cost ({asset.unit.site.currency}) <input name="cost" type="number" step="any" min={0} /></label>
+          <label>Notes <input name="notes" /></label>
+          <button type="submit">Record and reassess</button>
+        </form>
+      </details>
       <h2>Register history</h2>
       {revisions === null || revisions.length === 0 ? (
         <p className="subtle">No recorded changes{asset.demoTruth ? " (loaded as demo data)" : ""}.</p>

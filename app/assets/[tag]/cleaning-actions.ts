@@ -1,0 +1,26 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
+import { CleaningRecordError, recordCleaning } from "@/lib/data/record-cleaning";
+import { getPrisma } from "@/lib/db";
+
+/** Records a cleaning from the asset page; the asset is reassessed before the page reloads. */
+export async function recordCleaningAction(formData: FormData): Promise<void> {
+  const tag = String(formData.get("tag") ?? "");
+  const text = (name: string) => {
+    const value = formData.get(name);
+    return typeof value === "string" && value.trim() !== "" ? value.trim() : undefined;
+  };
+  const cost = text("cost");
+  let error: string | null = null;
+  try {
+    await recordCleaning(getPrisma(), { tag, date: text("date"), endDate: text("endDate"), method: text("method") ?? "", cost: cost === undefined ? undefined : Number(cost), notes: text("notes") ?? "" }, "web");
+  } catch (caught) {
+    if (!(caught instanceof CleaningRecordError)) throw caught;
+    error = caught.message;
+  }
+  revalidatePath(`/assets/${encodeURIComponent(tag)}`);
+  revalidatePath("/");
+  redirect(`/assets/${encodeURIComponent(tag)}${error ? `?error=${encodeURIComponent(error)}` : "?saved=1"}`);
+}

@@ -15,7 +15,7 @@ export const MEASUREMENT_ROLES = [
 
 export type MeasurementRole = (typeof MEASUREMENT_ROLES)[number];
 
-/** "pressureDrop" has no entry in lib/core/units; lib/import/pressure-units.ts converts it. */
+/** "pressureDrop" units for imports are the subset in lib/import/pressure-units.ts (factors from lib/core/units). */
 export type RoleQuantity = Extract<Quantity, "temperature" | "massFlow"> | "pressureDrop";
 
 export interface RoleDefinition {

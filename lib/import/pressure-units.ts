@@ -1,17 +1,12 @@
-// Pressure (pressure-drop) units for imported columns. lib/core/units has no pressure quantity, so the
-// factors live here, derived from exact definitions like the factors there.
-import { KILOGRAMS_PER_POUND } from "../core/units";
-
-/** Standard acceleration of gravity g_n = 9.806 65 m/s² exactly (3rd CGPM 1901; NIST SP 811 (2008) B.8 note). */
-const STANDARD_GRAVITY = 9.80665;
-/** 1 in = 0.0254 m exactly (1959 agreement; NIST SP 811 (2008) B.8). */
-const METRES_PER_INCH = 0.0254;
+// Pressure (pressure-drop) units accepted for imported columns: the pressure units of lib/core/units that a
+// historian export uses for a drop (MPa is left out), with the factor taken from there.
+import { UNIT_TABLE } from "../core/units";
 
 /**
  * 1 psi (pound-force per square inch) = 0.453 592 37 kg × 9.806 65 m/s² / (0.0254 m)² = 6894.757 293 168… Pa.
  * NIST SP 811 (2008) B.8 prints 6.894 757 E+03.
  */
-export const PASCALS_PER_PSI = (KILOGRAMS_PER_POUND * STANDARD_GRAVITY) / (METRES_PER_INCH * METRES_PER_INCH);
+export const PASCALS_PER_PSI = UNIT_TABLE.pressure.find((unit) => unit.id === "psi")?.scale ?? Number.NaN;
 
 export type PressureUnit = "Pa" | "kPa" | "bar" | "psi";
 

@@ -1,5 +1,5 @@
 // Units of the measured columns: temperatures and mass flows through lib/core/units, pressure drops through
-// ./pressure-units (lib/core/units has no pressure quantity).
+// ./pressure-units (a subset of the pressure units of lib/core/units).
 import { parseUnit, toSI, UNIT_TABLE, UnitError, type MassFlowUnit, type TemperatureUnit } from "../core/units";
 import type { RoleQuantity } from "./measurement-roles";
 import { findPressureUnit, PRESSURE_UNITS, pressureToPascal, type PressureUnit } from "./pressure-units";

@@ -83,8 +83,8 @@ function weightedNorm(vector: Float64Array, scale: Float64Array): number {
  * bound get null standard errors.
  * Valid: r continuously differentiable; m ≥ 1. For a fit, the covariance assumes independent residuals of equal
  * variance (after any weighting built into r).
- * Source: Levenberg (1944), Q. Appl. Math. 2:164–168; Marquardt (1963), J. SIAM 11:431–441; Moré (1978), Lecture
- * Notes in Mathematics 630:105–116; Nielsen (1999), IMM-REP-1999-05; Madsen, Nielsen & Tingleff (2004), Methods for
+ * Source: Levenberg (1944), Q. Appl. Math. 2:164–168; Marquardt (1963), J. SIAM 11:431–441; Moré (1978), Springer
+ * LNM 630:105–116; Nielsen (1999), IMM-REP-1999-05; Madsen, Nielsen & Tingleff (2004), Methods for
  * Non-linear Least Squares Problems, 2nd ed., Algorithm 3.16; Kanzow, Yamashita & Fukushima (2004), J. Comput. Appl.
  * Math. 172:375–397. Validated on NIST StRD Misra1a, Misra1b and BoxBOD (certified values).
  *

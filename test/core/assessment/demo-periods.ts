@@ -1,3 +1,4 @@
+import { dailyPeriods as dailyMeans } from "../../../lib/core/assessment/daily-periods";
 import type { AssessmentAsset, AssessmentCleaning, AssessmentPeriod } from "../../../lib/core/assessment";
 import type { DemoAssetSimulation } from "../../../lib/demo";
 import { streamDuty } from "../../../lib/core/thermal";
@@ -113,40 +114,5 @@ export function hourlyPeriods(simulation: DemoAssetSimulation): AssessmentPeriod
 
 /** Daily periods: the means of each UTC day's usable hours (see hourlyPeriods and the file comment). */
 export function dailyPeriods(simulation: DemoAssetSimulation): AssessmentPeriod[] {
-  const days: AssessmentPeriod[] = [];
-  let current: { day: number; count: number; sums: Omit<AssessmentPeriod, "startMs" | "usable"> } | null = null;
-  const flush = () => {
-    if (current === null || current.count === 0) return;
-    const { day, count, sums } = current;
-    days.push({
-      startMs: day * DAY_MS,
-      hotInK: sums.hotInK / count,
-      hotOutK: sums.hotOutK / count,
-      coldInK: sums.coldInK / count,
-      coldOutK: sums.coldOutK / count,
-      hotFlowKgPerS: sums.hotFlowKgPerS / count,
-      coldFlowKgPerS: sums.coldFlowKgPerS / count,
-      dutyW: sums.dutyW / count,
-      usable: true,
-    });
-  };
-  for (const hour of hourlyPeriods(simulation)) {
-    if (!hour.usable) continue;
-    const day = Math.floor(hour.startMs / DAY_MS);
-    if (current === null || current.day !== day) {
-      flush();
-      current = { day, count: 0, sums: { hotInK: 0, hotOutK: 0, coldInK: 0, coldOutK: 0, hotFlowKgPerS: 0, coldFlowKgPerS: 0, dutyW: 0 } };
-    }
-    const sums = current.sums;
-    sums.hotInK += hour.hotInK;
-    sums.hotOutK += hour.hotOutK;
-    sums.coldInK += hour.coldInK;
-    sums.coldOutK += hour.coldOutK;
-    sums.hotFlowKgPerS += hour.hotFlowKgPerS;
-    sums.coldFlowKgPerS += hour.coldFlowKgPerS;
-    sums.dutyW += hour.dutyW;
-    current.count += 1;
-  }
-  flush();
-  return days;
+  return dailyMeans(hourlyPeriods(simulation));
 }

@@ -1,3 +1,8 @@
+-- AlterTable
+ALTER TABLE "Site" ADD COLUMN     "cleaningCostCents" INTEGER NOT NULL DEFAULT 3000000,
+ADD COLUMN     "cleaningOutageDays" DOUBLE PRECISION NOT NULL DEFAULT 5,
+ADD COLUMN     "lostProductionCentsPerDay" INTEGER NOT NULL DEFAULT 0;
+
 -- CreateTable
 CREATE TABLE "PlanSettings" (
     "siteId" INTEGER NOT NULL,

@@ -1,20 +1,17 @@
 // The reject report of an import as CSV (line, reason), safe to open in a spreadsheet.
+import { spreadsheetCsvField, spreadsheetText } from "../present/spreadsheet-text";
 import type { RejectedRow } from "./import-errors";
 
-const FORMULA_START = /^[=+\-@\t\r]/;
-
 /**
- * Neutralises spreadsheet formula injection: a cell starting with = + - @ tab or carriage return is prefixed with a
- * single quote, so a spreadsheet shows it as text instead of evaluating it (OWASP, "CSV Injection").
+ * Neutralises spreadsheet formula injection: a cell starting with = + - @ tab or carriage return (and NUL, LF) is
+ * prefixed with a single quote, so a spreadsheet shows it as text instead of evaluating it (OWASP, "CSV Injection").
+ * Kept as a name for callers; the rule lives in lib/present/spreadsheet-text.ts.
  */
-export function neutraliseFormula(cell: string): string {
-  return FORMULA_START.test(cell) ? `'${cell}` : cell;
-}
+export const neutraliseFormula = spreadsheetText;
 
-/** One CSV field (RFC 4180): quoted when it holds a comma, quote or line break, quotes doubled. */
+/** One CSV field (RFC 4180): neutralised, then quoted when it holds a comma, quote or line break, quotes doubled. */
 export function csvField(cell: string): string {
-  const safe = neutraliseFormula(cell);
-  return /[",\r\n]/.test(safe) ? `"${safe.replaceAll('"', '""')}"` : safe;
+  return spreadsheetCsvField(cell);
 }
 
 /** "line,reason" then one row per rejected row, CRLF line ends (RFC 4180). */

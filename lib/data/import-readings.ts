@@ -3,6 +3,7 @@ import type { Readable } from "node:stream";
 import { Prisma, type PrismaClient } from "../../generated/prisma/client";
 import { ImportFailure, ImportRefusal, type RejectedRow } from "../import/import-errors";
 import { resolveImportLimits, type ImportLimits } from "../import/import-limits";
+import { safeFileName } from "../import/safe-file-name";
 import type { ImportOptions, ImportSource } from "../import/import-options";
 import { MEASUREMENT_ROLES, ROLE_DEFINITIONS, type MeasurementRole } from "../import/measurement-roles";
 import {
@@ -229,8 +230,10 @@ function usedOptions(settings: ReadingsCsvSettings | null, request: ImportReadin
  * @throws ImportRefusal when the file or request cannot be imported as given (code and message say why)
  * @throws ImportFailure when the import stopped for a reason outside the file (database, stream)
  */
-export async function importReadings(prisma: PrismaClient, request: ImportReadingsRequest): Promise<ImportSummary> {
+export async function importReadings(prisma: PrismaClient, given: ImportReadingsRequest): Promise<ImportSummary> {
   const started = Date.now();
+  // The name is the user's (upload, query, CLI path): recorded and shown only, reduced to a safe label.
+  const request: ImportReadingsRequest = { ...given, fileName: safeFileName(given.fileName) };
   const options = request.options ?? {};
   let limits: ImportLimits;
   try {

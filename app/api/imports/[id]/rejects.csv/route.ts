@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { getImportBatch } from "@/lib/data/get-import-batch";
 import { getPrisma } from "@/lib/db";
 import { rejectsToCsv } from "@/lib/import/reject-report-csv";
+import { attachmentDisposition } from "@/lib/present/attachment-disposition";
 
 export const dynamic = "force-dynamic";
 
@@ -17,7 +18,7 @@ export async function GET(_request: Request, { params }: { params: Promise<{ id:
   return new Response(rejectsToCsv(batch.rejects), {
     headers: {
       "Content-Type": "text/csv; charset=utf-8",
-      "Content-Disposition": `attachment; filename="import-${batch.id}-rejects.csv"`,
+      "Content-Disposition": attachmentDisposition(`import-${batch.id}-rejects.csv`),
       "X-Content-Type-Options": "nosniff",
     },
   });

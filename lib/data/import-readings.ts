@@ -21,6 +21,7 @@ import {
   type ColumnMapping,
   type ColumnMappingInput,
 } from "../validation/column-mapping";
+import { recordAudit } from "./record-audit";
 
 export type { ImportOptions, ImportSource };
 
@@ -28,6 +29,8 @@ export interface ImportReadingsRequest {
   assetTag: string;
   source: ImportSource;
   createdBy: string;
+  /** The signed-in user's id for the audit log; null or absent for the CLI. */
+  userId?: string | null;
   fileName: string;
   /** The file's bytes (a file stream, an HTTP body): read once, never held whole. */
   stream: Readable | AsyncIterable<unknown>;
@@ -311,6 +314,15 @@ export async function importReadings(prisma: PrismaClient, given: ImportReadings
           const mapping = settings.mapping as unknown as Prisma.InputJsonValue;
           await transaction.columnMapping.upsert({ where: { assetId: asset.id }, create: { assetId: asset.id, mapping }, update: { mapping } });
         }
+        await recordAudit(transaction, {
+          userId: request.userId ?? null,
+          actor: request.createdBy,
+          action: "import.completed",
+          entity: "import",
+          entityId: String(batchId),
+          summary: `imported ${request.fileName} into ${asset.tag}: ${rowsNew} new, ${rowsChanged} changed, ${reader.rowsRejected} rejected rows`,
+          details: { tag: asset.tag, source: request.source, rowsRead: reader.rowsRead, rowsNew, rowsChanged, rowsRejected: reader.rowsRejected },
+        });
         return { reader, settings, batchId, rowsNew, rowsChanged, mappingSaved };
       },
       { maxWait: 10_000, timeout: limits.transactionTimeoutMs },
@@ -401,6 +413,15 @@ async function recordFailedBatch(
       createdBy: request.createdBy,
     },
     select: { id: true },
+  });
+  await recordAudit(prisma, {
+    userId: request.userId ?? null,
+    actor: request.createdBy,
+    action: "import.failed",
+    entity: "import",
+    entityId: String(batch.id),
+    summary: `import of ${request.fileName} into ${request.assetTag} failed: ${failure.message}`.slice(0, 500),
+    details: { tag: request.assetTag, source: request.source, rowsRead: reader?.rowsRead ?? 0, rowsRejected: reader?.rowsRejected ?? 0 },
   });
   return batch.id;
 }

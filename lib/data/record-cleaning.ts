@@ -1,11 +1,13 @@
 // Records a cleaning of an asset and recomputes its assessment (a cleaning starts a new fouling cycle).
 import type { PrismaClient } from "../../generated/prisma/client";
+import { recordAudit } from "./record-audit";
 import { refreshAssessment } from "./refresh-assessment";
 import { cleaningSchema, type CleaningInput } from "../validation/cleaning";
 
 export class CleaningRecordError extends Error {}
 
-export async function recordCleaning(prisma: PrismaClient, input: CleaningInput, createdBy: string): Promise<{ id: number; reassessed: boolean }> {
+/** `userId`: the signed-in user, null for the CLI. The cleaning and its audit event are written together. */
+export async function recordCleaning(prisma: PrismaClient, input: CleaningInput, createdBy: string, userId: string | null = null): Promise<{ id: number; reassessed: boolean }> {
   const parsed = cleaningSchema.safeParse(input);
   if (!parsed.success) throw new CleaningRecordError(parsed.error.issues.map((issue) => `${issue.path.join(".") || "cleaning"}: ${issue.message}`).join("; "));
   const cleaning = parsed.data;
@@ -15,16 +17,29 @@ export async function recordCleaning(prisma: PrismaClient, input: CleaningInput,
     where: { assetId: asset.id, date: { lte: cleaning.endDate ?? cleaning.date }, OR: [{ endDate: { gte: cleaning.date } }, { endDate: null, date: { gte: cleaning.date } }] },
   });
   if (overlapping) throw new CleaningRecordError(`${cleaning.tag} already has a cleaning recorded on ${overlapping.date.toISOString().slice(0, 10)} that overlaps this one`);
-  const created = await prisma.cleaning.create({
-    data: {
-      assetId: asset.id,
-      date: cleaning.date,
-      endDate: cleaning.endDate ?? null,
-      method: cleaning.method,
-      costCents: cleaning.cost === undefined ? null : Math.round(cleaning.cost * 100),
-      notes: cleaning.notes,
-      createdBy,
-    },
+  const created = await prisma.$transaction(async (tx) => {
+    const row = await tx.cleaning.create({
+      data: {
+        assetId: asset.id,
+        date: cleaning.date,
+        endDate: cleaning.endDate ?? null,
+        method: cleaning.method,
+        costCents: cleaning.cost === undefined ? null : Math.round(cleaning.cost * 100),
+        notes: cleaning.notes,
+        createdBy,
+      },
+    });
+    const day = row.date.toISOString().slice(0, 10);
+    await recordAudit(tx, {
+      userId,
+      actor: createdBy,
+      action: "cleaning.record",
+      entity: "cleaning",
+      entityId: String(row.id),
+      summary: `recorded a ${cleaning.method} cleaning of ${cleaning.tag} on ${day}`,
+      details: { tag: cleaning.tag, date: row.date.toISOString(), endDate: row.endDate?.toISOString() ?? null, method: row.method, costCents: row.costCents },
+    });
+    return row;
   });
   const reassessed = (await refreshAssessment(prisma, cleaning.tag)) !== null;
   return { id: created.id, reassessed };

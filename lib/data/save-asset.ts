@@ -10,6 +10,7 @@ import {
   type AssetFileParsed,
 } from "../validation/asset";
 import { arrangementToColumns, heatCapacityToColumns } from "./asset-columns";
+import { recordAudit } from "./record-audit";
 
 type Transaction = Prisma.TransactionClient;
 
@@ -125,8 +126,8 @@ export interface SaveAssetResult {
   changedFields: string[];
 }
 
-/** Creates a new asset; refuses a tag that exists. */
-export async function createAsset(prisma: PrismaClient, asset: AssetFileParsed, changedBy: string): Promise<SaveAssetResult> {
+/** Creates a new asset; refuses a tag that exists. `userId`: the signed-in user, null for the CLI. */
+export async function createAsset(prisma: PrismaClient, asset: AssetFileParsed, changedBy: string, userId: string | null = null): Promise<SaveAssetResult> {
   const data = assetData(asset);
   return prisma.$transaction(async (tx) => {
     if (await tx.asset.findUnique({ where: { tag: asset.tag } })) {
@@ -136,12 +137,13 @@ export async function createAsset(prisma: PrismaClient, asset: AssetFileParsed, 
     const created = await tx.asset.create({ data: { tag: asset.tag, unitId, ...data.columns, instruments: { create: data.instruments } } });
     const changes = difference({}, { unit: unitCode, ...data.columns, instruments: data.instruments });
     await tx.assetRevision.create({ data: { assetId: created.id, changedBy, action: "created", changes: changes as Prisma.InputJsonValue } });
+    await recordAudit(tx, { userId, actor: changedBy, action: "asset.create", entity: "asset", entityId: asset.tag, summary: `created asset ${asset.tag} (${asset.name})`, details: { fields: Object.keys(changes) } });
     return { tag: asset.tag, action: "created", changedFields: Object.keys(changes) };
   });
 }
 
 /** Replaces an existing asset's register entry with the file's values; records what changed. */
-export async function updateAsset(prisma: PrismaClient, asset: AssetFileParsed, changedBy: string): Promise<SaveAssetResult> {
+export async function updateAsset(prisma: PrismaClient, asset: AssetFileParsed, changedBy: string, userId: string | null = null): Promise<SaveAssetResult> {
   const data = assetData(asset);
   return prisma.$transaction(async (tx) => {
     const existing = await tx.asset.findUnique({ where: { tag: asset.tag }, include: { unit: true, instruments: { orderBy: { role: "asc" } } } });
@@ -158,6 +160,7 @@ export async function updateAsset(prisma: PrismaClient, asset: AssetFileParsed, 
       await tx.instrument.createMany({ data: data.instruments.map((instrument) => ({ ...instrument, assetId: existing.id })) });
     }
     await tx.assetRevision.create({ data: { assetId: existing.id, changedBy, action: "updated", changes: changes as Prisma.InputJsonValue } });
+    await recordAudit(tx, { userId, actor: changedBy, action: "asset.update", entity: "asset", entityId: asset.tag, summary: `updated asset ${asset.tag}: ${Object.keys(changes).join(", ")}`, details: { changes } });
     return { tag: asset.tag, action: "updated", changedFields: Object.keys(changes) };
   });
 }

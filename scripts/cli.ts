@@ -7,6 +7,7 @@ import { registerCleaningCommands } from "./cli/cleaning-commands";
 import { UsageError } from "./cli/context";
 import { registerDatabaseCommands } from "./cli/database-commands";
 import { registerImportCommands } from "./cli/import-commands";
+import { registerPlanCommands } from "./cli/plan-commands";
 import { registerQualityCommands } from "./cli/quality-commands";
 
 const program = new Command()
@@ -21,6 +22,7 @@ registerImportCommands(program);
 registerQualityCommands(program);
 registerAssessCommands(program);
 registerCleaningCommands(program);
+registerPlanCommands(program);
 
 try {
   await program.parseAsync(process.argv);

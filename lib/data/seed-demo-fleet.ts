@@ -3,6 +3,7 @@
 import type { PrismaClient, Prisma } from "../../generated/prisma/client";
 import { demoFleet, simulateDemoFleet } from "../demo";
 import type { ExchangerSpec, SimulationPlan, SimulationResult } from "../core/simulate";
+import { seedDemoPlanning } from "./seed-demo-planning";
 import { arrangementToColumns, heatCapacityToColumns } from "./asset-columns";
 import { insertReadings } from "./insert-readings";
 
@@ -111,6 +112,7 @@ async function loadFleet(tx: Prisma.TransactionClient, options: SeedOptions): Pr
     assets += 1;
     log(`  ${spec.tag}: ${result.readings.length} readings`);
   }
+  await seedDemoPlanning(tx, site.id, demoCleaningCostCents);
   return { assets, readings };
 }
 
@@ -132,7 +134,7 @@ export async function resetDemoFleet(prisma: PrismaClient, options: SeedOptions 
   return prisma.$transaction(
     async (tx) => {
       await tx.$executeRaw`select pg_advisory_xact_lock(${SEED_LOCK_KEY})`;
-      await tx.$executeRaw`truncate "Reading", "Cleaning", "Instrument", "DemoTruth", "Asset", "ProcessUnit", "Site" restart identity cascade`;
+      await tx.$executeRaw`truncate "Reading", "Cleaning", "Instrument", "DemoTruth", "Asset", "ProcessUnit", "Site", "PlanRun", "CleaningBooking", "CalendarWindow", "ExclusionGroup", "PlanSettings" restart identity cascade`;
       options.log?.("Loading the demo fleet (simulated operating data)...");
       return loadFleet(tx, options);
     },

@@ -1,6 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import type { ReactNode } from "react";
+import { getCurrentUser } from "@/lib/auth/current-user";
+import { can } from "@/lib/auth/permissions";
+import { signOutAction } from "./sign-in/actions";
 import "./globals.css";
 
 export const metadata: Metadata = {
@@ -8,15 +11,28 @@ export const metadata: Metadata = {
   description: "Heat-exchanger fouling monitoring, forecasting and cleaning planning",
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const user = await getCurrentUser();
   return (
     <html lang="en">
       <body>
         <header className="topbar">
           <Link href="/" className="brand">Foulcast</Link>
-          <nav aria-label="Main">
-            <Link href="/">Fleet</Link>
-          </nav>
+          {user ? (
+            <>
+              <nav aria-label="Main">
+                <Link href="/">Fleet</Link>
+                {can(user.role, "audit.read") ? <Link href="/audit">Audit log</Link> : null}
+                {can(user.role, "users.manage") ? <Link href="/admin/users">Users</Link> : null}
+              </nav>
+              <form action={signOutAction} className="account">
+                <span>
+                  {user.email} <span className="role">({user.role})</span>
+                </span>
+                <button type="submit">Sign out</button>
+              </form>
+            </>
+          ) : null}
         </header>
         <main>{children}</main>
       </body>

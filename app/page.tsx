@@ -1,5 +1,7 @@
 import Link from "next/link";
 import { AdvisoryCaution } from "./_components/advisory-caution";
+import { requireSignedInUser } from "@/lib/auth/current-user";
+import { can } from "@/lib/auth/permissions";
 import { listAssets } from "@/lib/data/list-assets";
 import { getPrisma } from "@/lib/db";
 import { describeArrangement, formatDate, formatDutyMW, formatSignificant } from "@/lib/present/format";
@@ -7,6 +9,7 @@ import { describeArrangement, formatDate, formatDutyMW, formatSignificant } from
 export const dynamic = "force-dynamic";
 
 export default async function FleetPage() {
+  const user = await requireSignedInUser();
   const assets = await listAssets(getPrisma());
   if (assets.length === 0) {
     return (
@@ -22,7 +25,7 @@ export default async function FleetPage() {
   return (
     <>
       <h1>Fleet — {site?.siteName}</h1>
-      <p className="actions"><Link href="/assets/new">Register an exchanger</Link></p>
+      {can(user.role, "assets.edit") ? <p className="actions"><Link href="/assets/new">Register an exchanger</Link></p> : null}
       <p className="subtle">{assets.length} exchangers in {units.length} process units. Latest reading {formatDate(latest, site?.siteTimeZone ?? "UTC")} (site time, {site?.siteTimeZone}).</p>
       <table className="grid" aria-label="Exchangers">
         <thead>

@@ -9,6 +9,7 @@ import { registerDatabaseCommands } from "./cli/database-commands";
 import { registerImportCommands } from "./cli/import-commands";
 import { registerPlanCommands } from "./cli/plan-commands";
 import { registerQualityCommands } from "./cli/quality-commands";
+import { registerUserCommands } from "./cli/user-commands";
 
 const program = new Command()
   .name("npm run cli --")
@@ -23,6 +24,7 @@ registerQualityCommands(program);
 registerAssessCommands(program);
 registerCleaningCommands(program);
 registerPlanCommands(program);
+registerUserCommands(program);
 
 try {
   await program.parseAsync(process.argv);

@@ -6,6 +6,8 @@ import exitHook from "async-exit-hook";
 import { spawn, type ChildProcess } from "node:child_process";
 import { prepareDatabase } from "../lib/database/prepare-database";
 import { seedDemoFleetIfEmpty } from "../lib/data/seed-demo-fleet";
+import { DEMO_PASSWORD, seedDemoUsersIfNone } from "../lib/data/seed-demo-users";
+import { authSecret } from "../lib/auth/auth-secret";
 import { refreshFleet } from "../lib/data/refresh-fleet";
 import { disconnectPrisma, getPrisma } from "../lib/db";
 
@@ -56,7 +58,14 @@ if (seeded) {
   log(`Loaded the demo fleet: ${seeded.assets} exchangers, ${seeded.readings} readings. Screening the data...`);
   await refreshFleet(getPrisma(), { log });
 }
+const demoUsers = await seedDemoUsersIfNone(getPrisma());
+if (demoUsers.length > 0) {
+  log(`No user accounts yet: made the demo accounts ${demoUsers.join(", ")} (password "${DEMO_PASSWORD}").`);
+  log("They are for the demo only: create your own users (npm run cli -- user add) and delete these.");
+}
 await disconnectPrisma();
+// Make the session-signing secret now (unless BETTER_AUTH_SECRET is set), so the web server only reads it.
+authSecret();
 
 const env = { ...process.env, DATABASE_URL: database.url, NEXT_TELEMETRY_DISABLED: "1" };
 const next = "node_modules/.bin/next";

@@ -1,6 +1,7 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { AccessDenied, requireRole } from "@/lib/auth/require-role";
 import { AssetRegisterError, createAsset, parseAssetFile, updateAsset } from "@/lib/data/save-asset";
 import { getPrisma } from "@/lib/db";
 import { AssetValidationError } from "@/lib/validation/asset";
@@ -12,8 +13,15 @@ export interface SaveAssetState {
   message?: string;
 }
 
-/** Server action behind the asset form: validates the entry (same schema as asset files) and saves it. */
+/** Server action behind the asset form: validates the entry (same schema as asset files) and saves it. Engineers and admins. */
 export async function saveAssetAction(mode: "create" | "update", json: string): Promise<SaveAssetState> {
+  let user;
+  try {
+    user = await requireRole("assets.edit");
+  } catch (error) {
+    if (error instanceof AccessDenied) return { ok: false, problems: [error.message] };
+    throw error;
+  }
   let raw: unknown;
   try {
     raw = JSON.parse(json);
@@ -23,7 +31,7 @@ export async function saveAssetAction(mode: "create" | "update", json: string): 
   try {
     const asset = parseAssetFile(raw);
     const save = mode === "create" ? createAsset : updateAsset;
-    const result = await save(getPrisma(), asset, "web");
+    const result = await save(getPrisma(), asset, user.email, user.id);
     revalidatePath("/");
     revalidatePath(`/assets/${encodeURIComponent(asset.tag)}`);
     return {

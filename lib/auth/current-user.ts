@@ -1,15 +1,13 @@
 // The signed-in user for pages and layouts (server components).
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
+import { PATH_HEADER } from "./path-header";
 import { sessionUser, type SignedInUser } from "./session-user";
 
 /** The signed-in user, or null. */
 export async function getCurrentUser(): Promise<SignedInUser | null> {
   return sessionUser(await headers());
 }
-
-/** Header proxy.ts sets to the requested path, so /sign-in can send the user back there. */
-export const PATH_HEADER = "x-foulcast-path";
 
 /** The signed-in user; an anonymous visitor (or an expired session) is sent to /sign-in?next=<this page>. */
 export async function requireSignedInUser(): Promise<SignedInUser> {

@@ -2,11 +2,13 @@
 
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
+import { requireRole } from "@/lib/auth/require-role";
 import { CleaningRecordError, recordCleaning } from "@/lib/data/record-cleaning";
 import { getPrisma } from "@/lib/db";
 
-/** Records a cleaning from the asset page; the asset is reassessed before the page reloads. */
+/** Records a cleaning from the asset page; the asset is reassessed before the page reloads. Engineers and admins. */
 export async function recordCleaningAction(formData: FormData): Promise<void> {
+  const user = await requireRole("cleanings.record");
   const tag = String(formData.get("tag") ?? "");
   const text = (name: string) => {
     const value = formData.get(name);
@@ -15,7 +17,7 @@ export async function recordCleaningAction(formData: FormData): Promise<void> {
   const cost = text("cost");
   let error: string | null = null;
   try {
-    await recordCleaning(getPrisma(), { tag, date: text("date"), endDate: text("endDate"), method: text("method") ?? "", cost: cost === undefined ? undefined : Number(cost), notes: text("notes") ?? "" }, "web");
+    await recordCleaning(getPrisma(), { tag, date: text("date"), endDate: text("endDate"), method: text("method") ?? "", cost: cost === undefined ? undefined : Number(cost), notes: text("notes") ?? "" }, user.email, user.id);
   } catch (caught) {
     if (!(caught instanceof CleaningRecordError)) throw caught;
     error = caught.message;

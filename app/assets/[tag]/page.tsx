@@ -14,6 +14,8 @@ import { FoulingChart } from "@/app/_components/fouling-chart";
 import { getStoredAssessment } from "@/lib/data/refresh-assessment";
 import type { Assessment } from "@/lib/core/assessment";
 import { getPrisma } from "@/lib/db";
+import { requireSignedInUser } from "@/lib/auth/current-user";
+import { can } from "@/lib/auth/permissions";
 import { describeArrangement, formatDate, formatDutyMW, formatSignificant, formatTemperatureC } from "@/lib/present/format";
 
 export const dynamic = "force-dynamic";
@@ -53,6 +55,7 @@ function describeChange(field: string, change: { before: unknown; after: unknown
 export default async function AssetPage({ params, searchParams }: { params: Promise<{ tag: string }>; searchParams: Promise<{ saved?: string; error?: string }> }) {
   const { tag } = await params;
   const { saved, error } = await searchParams;
+  const user = await requireSignedInUser();
   const prisma = getPrisma();
   const asset = await getAsset(prisma, decodeURIComponent(tag));
   if (!asset) notFound();
@@ -81,8 +84,9 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
       {saved ? <p className="notice" role="status">Changes saved.</p> : null}
       {error ? <p className="form-errors" role="alert">Not saved: {error}</p> : null}
       <p className="actions">
-        <Link href={`/assets/${encodeURIComponent(asset.tag)}/edit`}>Edit register entry</Link>
-        <Link href={`/assets/${encodeURIComponent(asset.tag)}/import`}>Import operating data</Link>
+        {can(user.role, "assets.edit") ? <Link href={`/assets/${encodeURIComponent(asset.tag)}/edit`}>Edit register entry</Link> : null}
+        {can(user.role, "data.import") ? <Link href={`/assets/${encodeURIComponent(asset.tag)}/import`}>Import operating data</Link> : null}
+        {can(user.role, "audit.read") ? <Link href={`/audit?entity=asset&entityId=${encodeURIComponent(asset.tag)}`}>Audit log</Link> : null}
       </p>
       <div className="columns">
         <section className="panel" aria-labelledby="design-heading">
@@ -217,6 +221,8 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
                 <td>
                   {alert.acknowledgedAt ? (
                     <span className="subtle">Acknowledged by {alert.acknowledgedBy} {formatDate(alert.acknowledgedAt, timeZone)}{alert.note ? `: ${alert.note}` : ""}</span>
+                  ) : !can(user.role, "alerts.acknowledge") ? (
+                    <span className="subtle">Open</span>
                   ) : (
                     <form action={acknowledgeAlertAction}>
                       <input type="hidden" name="alertId" value={alert.id} />
@@ -277,7 +283,7 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
           </tbody>
         </table>
       )}
-      <details className="panel">
+      {can(user.role, "cleanings.record") ? <details className="panel">
         <summary>Record a cleaning</summary>
         <form action={recordCleaningAction} className="inline-form">
           <input type="hidden" name="tag" value={asset.tag} />
@@ -288,7 +294,7 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
           <label>Notes <input name="notes" /></label>
           <button type="submit">Record and reassess</button>
         </form>
-      </details>
+      </details> : null}
       <h2>Register history</h2>
       {revisions === null || revisions.length === 0 ? (
         <p className="subtle">No recorded changes{asset.demoTruth ? " (loaded as demo data)" : ""}.</p>

@@ -1,12 +1,17 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { AccessDenied } from "@/app/_components/access-denied";
 import { AssetForm, type AssetDraft } from "@/app/_components/asset-form";
+import { requireSignedInUser } from "@/lib/auth/current-user";
+import { can } from "@/lib/auth/permissions";
 import { exportAssetFile } from "@/lib/data/export-asset-file";
 import { getPrisma } from "@/lib/db";
 
 export const dynamic = "force-dynamic";
 
 export default async function EditAssetPage({ params }: { params: Promise<{ tag: string }> }) {
+  const user = await requireSignedInUser();
+  if (!can(user.role, "assets.edit")) return <AccessDenied user={user} permission="assets.edit" />;
   const tag = decodeURIComponent((await params).tag);
   const file = await exportAssetFile(getPrisma(), tag);
   if (!file) notFound();

@@ -1,6 +1,9 @@
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { AccessDenied } from "@/app/_components/access-denied";
 import { ImportUploadForm } from "@/app/_components/import-upload-form";
+import { requireSignedInUser } from "@/lib/auth/current-user";
+import { can } from "@/lib/auth/permissions";
 import { getImportContext } from "@/lib/data/get-import-context";
 import { getPrisma } from "@/lib/db";
 import { resolveImportLimits } from "@/lib/import/import-limits";
@@ -8,6 +11,8 @@ import { resolveImportLimits } from "@/lib/import/import-limits";
 export const dynamic = "force-dynamic";
 
 export default async function ImportPage({ params }: { params: Promise<{ tag: string }> }) {
+  const user = await requireSignedInUser();
+  if (!can(user.role, "data.import")) return <AccessDenied user={user} permission="data.import" />;
   const { tag } = await params;
   const context = await getImportContext(getPrisma(), decodeURIComponent(tag));
   if (!context) notFound();

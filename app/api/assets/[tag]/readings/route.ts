@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { Readable } from "node:stream";
 import type { ReadableStream as NodeReadableStream } from "node:stream/web";
+import { withRole } from "@/lib/auth/with-role";
 import { importReadings } from "@/lib/data/import-readings";
 import { refreshAfterImport } from "@/lib/data/refresh-after-import";
 import { getPrisma } from "@/lib/db";
@@ -27,9 +28,10 @@ function problem(status: number, code: string, error: string, extra: Record<stri
  * Query parameters: mapping (auto | saved | canonical | JSON mapping), timeZone, decimal, delimiter,
  * timestampFormat, trustUnits, fileName, source (api | web). The body is streamed, never held whole, and refused
  * with 413 once it passes FOULCAST_MAX_IMPORT_BYTES. 201 with the summary; 4xx with { error, code } naming the
- * problem; nothing is written on an error. There is no sign-in yet: createdBy is "anonymous".
+ * problem; nothing is written on an error. Engineers and admins only (401/403 otherwise, and 403 for a cross-site
+ * request); createdBy is the signed-in user's email.
  */
-export async function POST(request: Request, { params }: { params: Promise<{ tag: string }> }) {
+export const POST = withRole("data.import", async (request: Request, { params }: { params: Promise<{ tag: string }> }, user) => {
   const { tag } = await params;
   const assetTag = decodeURIComponent(tag);
   const url = new URL(request.url);
@@ -73,7 +75,8 @@ export async function POST(request: Request, { params }: { params: Promise<{ tag
     const summary = await importReadings(getPrisma(), {
       assetTag,
       source,
-      createdBy: "anonymous",
+      createdBy: user.email,
+      userId: user.id,
       fileName,
       stream: body,
       mapping,
@@ -97,4 +100,4 @@ export async function POST(request: Request, { params }: { params: Promise<{ tag
     if (error instanceof ImportFailure) return problem(500, "failed", error.message, { batchId: error.batchId });
     throw error;
   }
-}
+});

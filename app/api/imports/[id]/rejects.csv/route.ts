@@ -1,4 +1,5 @@
 import { NextResponse } from "next/server";
+import { withRole } from "@/lib/auth/with-role";
 import { getImportBatch } from "@/lib/data/get-import-batch";
 import { getPrisma } from "@/lib/db";
 import { rejectsToCsv } from "@/lib/import/reject-report-csv";
@@ -10,7 +11,7 @@ export const dynamic = "force-dynamic";
  * GET /api/imports/{id}/rejects.csv: the reject report (line, reason) of an import as a CSV download, cells that
  * a spreadsheet would read as formulas neutralised (see lib/import/reject-report-csv.ts).
  */
-export async function GET(_request: Request, { params }: { params: Promise<{ id: string }> }) {
+export const GET = withRole("read", async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const { id } = await params;
   if (!/^\d{1,10}$/.test(id)) return NextResponse.json({ error: "the import id must be a whole number", code: "bad-request" }, { status: 400 });
   const batch = await getImportBatch(getPrisma(), Number(id));
@@ -22,4 +23,4 @@ export async function GET(_request: Request, { params }: { params: Promise<{ id:
       "X-Content-Type-Options": "nosniff",
     },
   });
-}
+});

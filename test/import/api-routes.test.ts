@@ -3,10 +3,13 @@ import { POST } from "../../app/api/assets/[tag]/readings/route";
 import { GET as getBatch } from "../../app/api/imports/[id]/route";
 import { GET as getRejects } from "../../app/api/imports/[id]/rejects.csv/route";
 import { disconnectPrisma } from "../../lib/db";
+import { createSignedInUser, type TestUser } from "../support/auth-session";
 import { createTestDatabase, type TestDatabase } from "../support/test-database";
 import { CANONICAL_HEADER, canonicalCsv, createTestAsset } from "./support/fixtures";
 
 let database: TestDatabase;
+/** The routes need a signed-in engineer (test/security covers refusals). */
+let engineer: TestUser;
 const START = Date.UTC(2026, 2, 1);
 
 beforeAll(async () => {
@@ -14,6 +17,7 @@ beforeAll(async () => {
   // the route handlers use the process-wide client (lib/db.ts), which reads DATABASE_URL on first use
   process.env.DATABASE_URL = database.url;
   await createTestAsset(database.prisma, "E-API");
+  engineer = await createSignedInUser(database.prisma, "engineer");
 });
 
 afterAll(async () => {
@@ -22,21 +26,22 @@ afterAll(async () => {
 });
 
 function post(tag: string, body: BodyInit | null, query = "", headers: Record<string, string> = { "content-type": "text/csv" }) {
-  const request = new Request(`http://localhost/api/assets/${tag}/readings${query}`, { method: "POST", body, headers, duplex: "half" } as RequestInit);
+  const request = new Request(`http://localhost/api/assets/${tag}/readings${query}`, { method: "POST", body, headers: { ...headers, cookie: engineer.cookie }, duplex: "half" } as RequestInit);
   return POST(request, { params: Promise.resolve({ tag }) });
 }
 
 const idParams = (id: string | number) => ({ params: Promise.resolve({ id: String(id) }) });
+const signedIn = () => new Request("http://localhost", { headers: { cookie: engineer.cookie } });
 
 describe("POST /api/assets/{tag}/readings", () => {
   it("imports a text/csv body and answers 201 with the summary and where to find the batch", async () => {
     const response = await post("E-API", canonicalCsv(20, START), "?fileName=march.csv");
     expect(response.status).toBe(201);
     const summary = (await response.json()) as { batchId: number; rowsNew: number; fileName: string; source: string; createdBy: string; rejectsUrl: string };
-    expect(summary).toMatchObject({ rowsNew: 20, fileName: "march.csv", source: "api", createdBy: "anonymous" });
+    expect(summary).toMatchObject({ rowsNew: 20, fileName: "march.csv", source: "api", createdBy: engineer.email });
     expect(response.headers.get("location")).toBe(`/api/imports/${summary.batchId}`);
     expect(summary.rejectsUrl).toBe(`/api/imports/${summary.batchId}/rejects.csv`);
-    const batch = await getBatch(new Request("http://localhost"), idParams(summary.batchId));
+    const batch = await getBatch(signedIn(), idParams(summary.batchId));
     expect(await batch.json()).toMatchObject({ id: summary.batchId, status: "completed", rowsNew: 20, rejects: [] });
   });
 
@@ -62,7 +67,7 @@ describe("POST /api/assets/{tag}/readings", () => {
     const response = await post("E-API", text, `?mapping=${encodeURIComponent(JSON.stringify(mapping))}`);
     expect(response.status).toBe(201);
     const { batchId } = (await response.json()) as { batchId: number };
-    const csv = await getRejects(new Request("http://localhost"), idParams(batchId));
+    const csv = await getRejects(signedIn(), idParams(batchId));
     expect(csv.headers.get("content-type")).toBe("text/csv; charset=utf-8");
     expect(csv.headers.get("content-disposition")).toBe(`attachment; filename="import-${batchId}-rejects.csv"`);
     // OWASP "CSV Injection": the reason starts with "=", so it is prefixed with a single quote (then RFC 4180 quoting)
@@ -105,8 +110,8 @@ describe("POST /api/assets/{tag}/readings", () => {
 
 describe("GET /api/imports/{id}", () => {
   it("answers 404 for an unknown import and 400 for an id that is not a number", async () => {
-    expect((await getBatch(new Request("http://localhost"), idParams(999_999))).status).toBe(404);
-    expect((await getBatch(new Request("http://localhost"), idParams("../etc"))).status).toBe(400);
-    expect((await getRejects(new Request("http://localhost"), idParams("1e3"))).status).toBe(400);
+    expect((await getBatch(signedIn(), idParams(999_999))).status).toBe(404);
+    expect((await getBatch(signedIn(), idParams("../etc"))).status).toBe(400);
+    expect((await getRejects(signedIn(), idParams("1e3"))).status).toBe(400);
   });
 });

@@ -7,6 +7,7 @@ import { seedDemoFleetIfEmpty } from "../../lib/data/seed-demo-fleet";
 import { disconnectPrisma } from "../../lib/db";
 import { simulateDemoFleet } from "../../lib/demo";
 import { createTestDatabase, type TestDatabase } from "../support/test-database";
+import { authenticatedRequest } from "../support/authenticated-request";
 
 let database: TestDatabase;
 const TAG = "E-1101";
@@ -70,11 +71,11 @@ describe("assessmentDocument", () => {
   it("is served by GET /api/assets/{tag}/assessment, with 404 for an unknown tag", async () => {
     process.env.DATABASE_URL = database.url;
     const { GET } = await import("../../app/api/assets/[tag]/assessment/route");
-    const response = await GET(new Request(`http://localhost/api/assets/${TAG}/assessment`), { params: Promise.resolve({ tag: TAG }) });
+    const response = await GET(await authenticatedRequest(`http://localhost/api/assets/${TAG}/assessment`, { role: "viewer" }), { params: Promise.resolve({ tag: TAG }) });
     expect(response.status).toBe(200);
     const body = (await response.json()) as { tag: string; forecasts: { duty: { status: string } } };
     expect(body.tag).toBe(TAG);
-    const missing = await GET(new Request("http://localhost/api/assets/E-0000/assessment"), { params: Promise.resolve({ tag: "E-0000" }) });
+    const missing = await GET(await authenticatedRequest("http://localhost/api/assets/E-0000/assessment", { role: "viewer" }), { params: Promise.resolve({ tag: "E-0000" }) });
     expect(missing.status).toBe(404);
     expect(await missing.json()).toEqual({ error: "unknown asset E-0000" });
   });

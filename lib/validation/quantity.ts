@@ -19,10 +19,13 @@ export function quantitySchema(quantity: Quantity) {
     if (value === undefined || value === null) return fail("a value is required");
     if (typeof value !== "number" || !Number.isFinite(value)) return fail(`value must be a finite number, got ${JSON.stringify(value)}`);
     if (typeof unit !== "string") return fail(`unit must be one of ${allowed}`);
+    let valueSI: number;
     try {
-      return toSI(quantity, value, parseUnit(quantity, unit));
+      valueSI = toSI(quantity, value, parseUnit(quantity, unit));
     } catch (error) {
       return fail((error as Error).message);
     }
+    // a finite value can overflow in conversion (1e308 Btu/(lb·°F) × 4186.8 = Infinity J/(kg·K))
+    return Number.isFinite(valueSI) ? valueSI : fail(`value ${value} ${unit} is out of range: it is not a finite number in ${SI_UNIT[quantity]}`);
   });
 }

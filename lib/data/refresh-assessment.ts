@@ -4,10 +4,11 @@ import type { Prisma, PrismaClient } from "../../generated/prisma/client";
 import { assessAsset, type Assessment, type AssessmentPeriod } from "../core/assessment";
 import { arrangementFromColumns } from "./asset-columns";
 import { assetHeatCapacities } from "./exchanger-model";
+import { assessmentSummary } from "../planning/assessment-summary";
 
 /** Assesses one asset as of its last screened period and stores the result; null when it has no usable data. */
 export async function refreshAssessment(prisma: PrismaClient, tag: string, options: { asOfMs?: number } = {}): Promise<Assessment | null> {
-  const asset = await prisma.asset.findUnique({ where: { tag }, include: { cleanings: { orderBy: { date: "asc" } } } });
+  const asset = await prisma.asset.findUnique({ where: { tag }, include: { cleanings: { orderBy: { date: "asc" } }, unit: { include: { site: true } } } });
   if (!asset) throw new Error(`unknown asset ${tag}`);
   const stored = await prisma.operatingPeriod.findMany({ where: { assetId: asset.id, lengthS: 86400 }, orderBy: { start: "asc" } });
   const periods: AssessmentPeriod[] = [];
@@ -54,11 +55,12 @@ export async function refreshAssessment(prisma: PrismaClient, tag: string, optio
     })),
     asOfMs,
   });
+  const summary = assessmentSummary(asset, asset.unit.site, assessment) as unknown as Prisma.InputJsonValue;
   await prisma.$transaction(async (tx) => {
     await tx.assetAssessment.upsert({
       where: { assetId: asset.id },
-      create: { assetId: asset.id, asOf: new Date(asOfMs), result: assessment as unknown as Prisma.InputJsonValue },
-      update: { asOf: new Date(asOfMs), computedAt: new Date(), result: assessment as unknown as Prisma.InputJsonValue },
+      create: { assetId: asset.id, asOf: new Date(asOfMs), result: assessment as unknown as Prisma.InputJsonValue, summary },
+      update: { asOf: new Date(asOfMs), computedAt: new Date(), result: assessment as unknown as Prisma.InputJsonValue, summary },
     });
     // Each cycle that ended with a cleaning carries that cleaning's effectiveness; cycles and cleanings are in time order.
     const ended = assessment.cycles.filter((cycle) => cycle.end !== null);

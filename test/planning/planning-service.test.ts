@@ -9,6 +9,7 @@ import { arrangementFromColumns } from "../../lib/data/asset-columns";
 import { assetHeatCapacities } from "../../lib/data/exchanger-model";
 import { acceptProposals, listBookings, moveBooking, releaseBooking } from "../../lib/planning/bookings";
 import { economicsSummary } from "../../lib/planning/economics-summary";
+import { fleetHealth } from "../../lib/data/fleet-health";
 import { exportPlan } from "../../lib/planning/export-plan";
 import { loadPlanInput, PlanningError } from "../../lib/planning/load-plan-input";
 import { runPlan } from "../../lib/planning/run-plan";
@@ -174,5 +175,21 @@ describe("plan runs on stored data", () => {
     // an XLSX file is a ZIP archive (ECMA-376 Part 2): local file header signature "PK\x03\x04"
     expect(xlsx.body.subarray(0, 4).toString("latin1")).toBe("PK\u0003\u0004");
     expect(xlsx.fileName).toMatch(/^cleaning-plan-bwh-\d+\.xlsx$/);
+  });
+
+  it("lists every exchanger with its stored summary, category and next cleaning for the fleet table", async () => {
+    const rows = await fleetHealth(database.prisma, { siteCode: "BWH", nowMs: NOW });
+    expect(rows.map((row) => row.tag).sort()).toEqual([...TAGS].sort());
+    for (const row of rows) {
+      expect(row.summary?.economics?.costPerDay ?? -1).toBeGreaterThan(0);
+      expect(row.summary?.sparkline.length ?? 0).toBeGreaterThan(5);
+      expect(row.summary?.sparkline.length ?? 99).toBeLessThanOrEqual(41);
+    }
+    // E-1103's proposals were booked above
+    expect(rows.find((row) => row.tag === "E-1103")?.nextCleaning?.booked).toBe(true);
+    // the stored summary holds the same cost per day as a fresh economics summary
+    const asset = await assetWithSite("E-1101");
+    const fresh = economicsSummary(asset, asset.unit.site, asset.assessment);
+    expect(rows.find((row) => row.tag === "E-1101")?.summary?.economics?.costPerDay).toBeCloseTo(fresh.ok ? fresh.summary.costPerDay : NaN, 6);
   });
 });

@@ -1,0 +1,3 @@
+-- AlterTable
+ALTER TABLE "AssetAssessment" ADD COLUMN     "summary" JSONB;
+

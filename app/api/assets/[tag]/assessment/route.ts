@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { withRole } from "@/lib/auth/with-role";
 import { assessmentDocument } from "@/lib/data/assessment-document";
 import { getPrisma } from "@/lib/db";
+import { badPathParameterMessage, pathParameter } from "@/lib/validation/path-parameter";
 
 export const dynamic = "force-dynamic";
 
@@ -10,7 +11,9 @@ export const dynamic = "force-dynamic";
  * 404 for an unknown tag, 409 when the asset has no usable screened data yet.
  */
 export const GET = withRole("read", async (request: Request, { params }: { params: Promise<{ tag: string }> }) => {
-  const tag = decodeURIComponent((await params).tag);
+  const segment = (await params).tag;
+  const tag = pathParameter(segment);
+  if (tag === null) return NextResponse.json({ error: badPathParameterMessage("asset tag", segment) }, { status: 400 });
   const detail = new URL(request.url).searchParams.get("detail") === "1";
   const lookup = await assessmentDocument(getPrisma(), tag, { detail });
   if (lookup.kind === "unknown-asset") return NextResponse.json({ error: `unknown asset ${tag}` }, { status: 404 });

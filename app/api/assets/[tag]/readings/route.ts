@@ -9,6 +9,7 @@ import { ImportFailure, ImportRefusal } from "@/lib/import/import-errors";
 import { resolveImportLimits } from "@/lib/import/import-limits";
 import { parseImportRequestOptions } from "@/lib/import/import-request-options";
 import { multipartBoundary, readMultipartUpload } from "@/lib/import/multipart-upload";
+import { badPathParameterMessage, pathParameter } from "@/lib/validation/path-parameter";
 
 export const dynamic = "force-dynamic";
 
@@ -33,7 +34,8 @@ function problem(status: number, code: string, error: string, extra: Record<stri
  */
 export const POST = withRole("data.import", async (request: Request, { params }: { params: Promise<{ tag: string }> }, user) => {
   const { tag } = await params;
-  const assetTag = decodeURIComponent(tag);
+  const assetTag = pathParameter(tag);
+  if (assetTag === null) return problem(400, "bad-request", badPathParameterMessage("asset tag", tag));
   const url = new URL(request.url);
   const query = Object.fromEntries(url.searchParams.entries());
   const { maxBytes } = resolveImportLimits();

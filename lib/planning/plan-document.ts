@@ -82,6 +82,11 @@ export function comparisonDocument(plan: CleaningPlan, comparison: PlanCompariso
   };
 }
 
+/** The core names weeks by index ("week 4"); people read the date of the week beside it. */
+function withWeekDates(message: string, weekStart: (week: number) => string): string {
+  return message.replace(/\bweek (\d+)\b/g, (_, week: string) => `week ${week} (${weekStart(Number(week))})`);
+}
+
 /** planDocument: the stored run with dates instead of week indices, explanations in words and the crew load per week. */
 export function planDocument(run: PlanRun): PlanDocument {
   const plan = run.result as unknown as CleaningPlan;
@@ -150,7 +155,7 @@ export function planDocument(run: PlanRun): PlanDocument {
       deadlineWeek: outcome.deadlineWeek,
       earliestWeek: outcome.earliestWeek,
     })),
-    violations: plan.violations.map((violation) => ({ kind: violation.kind, tags: violation.assetIds.map((id) => tags.get(id) ?? id), weeks: violation.weeks, message: violation.message })),
+    violations: plan.violations.map((violation) => ({ kind: violation.kind, tags: violation.assetIds.map((id) => tags.get(id) ?? id), weeks: violation.weeks, message: withWeekDates(violation.message, weekStart) })),
     excluded: inputs.excluded,
     calendar: inputs.calendar,
     comparison: comparison && run.previousRunId !== null ? { ...comparison, previousRunId: run.previousRunId } : null,

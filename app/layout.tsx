@@ -28,7 +28,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
               </nav>
               <form action={signOutAction} className="account">
                 <span>
-                  {user.email} <span className="role">({user.role})</span>
+                  <Link href="/account" title="Your account and units">{user.email}</Link> <span className="role">({user.role}, {user.unitSystem === "us" ? "US units" : "SI units"})</span>
                 </span>
                 <button type="submit">Sign out</button>
               </form>

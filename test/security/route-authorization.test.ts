@@ -38,6 +38,8 @@ const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 /** Public on purpose; everything else must refuse anonymous callers. */
 const PUBLIC_ROUTES = new Set(["api/health/route.ts", "api/auth/[...all]/route.ts"]);
 const PUBLIC_ACTIONS = new Set(["sign-in/actions.ts#signInAction", "sign-in/actions.ts#signOutAction"]);
+/** Open to every signed-in role on purpose (they change only the caller's own settings); anonymous callers are still refused. */
+const SELF_SERVICE_ACTIONS = new Set(["account/actions.ts#setUnitSystemAction"]);
 
 function filesUnder(folder: string, accept: (file: string) => boolean): string[] {
   return fs.readdirSync(folder, { withFileTypes: true, recursive: true }).flatMap((entry) => {
@@ -207,7 +209,7 @@ const actionCases = await Promise.all(
   }),
 ).then((lists) => lists.flat());
 
-describe.each(actionCases.filter((entry) => !PUBLIC_ACTIONS.has(entry.key)))("server action $key", ({ file, name, key }) => {
+describe.each(actionCases.filter((entry) => !PUBLIC_ACTIONS.has(entry.key) && !SELF_SERVICE_ACTIONS.has(entry.key)))("server action $key", ({ file, name, key }) => {
   it("redirects anonymous callers to /sign-in and refuses viewers, writing nothing", async () => {
     const action = ((await import(path.join(APP, file))) as Record<string, (...args: unknown[]) => Promise<unknown>>)[name] as (...args: unknown[]) => Promise<unknown>;
     const args = actionArguments(key) ?? [new FormData()];
@@ -239,5 +241,23 @@ describe("server action positive controls", () => {
     expect(await fingerprint()).not.toEqual(before);
     const event = await database.prisma.auditEvent.findFirstOrThrow({ orderBy: { id: "desc" } });
     expect(event).toMatchObject({ actor: admin.email, userId: admin.id });
+  });
+});
+
+describe("self-service server actions", () => {
+  it("setUnitSystemAction redirects anonymous callers, and lets a viewer change only their own units, audited", async () => {
+    const { setUnitSystemAction } = (await import(path.join(APP, "account/actions.ts"))) as { setUnitSystemAction: (data: FormData) => Promise<void> };
+    const before = await fingerprint();
+    const anonymous = await runAction(setUnitSystemAction as (...args: unknown[]) => Promise<unknown>, [form({ unitSystem: "us" })], null);
+    expect(anonymous.redirect).toBe("/sign-in");
+    expect(await fingerprint()).toEqual(before);
+    const asViewer = await runAction(setUnitSystemAction as (...args: unknown[]) => Promise<unknown>, [form({ unitSystem: "us" })], viewer);
+    expect(asViewer.redirect).toBe("/account?saved=1");
+    const rows = await database.prisma.user.findMany({ where: { id: { in: [viewer.id, engineer.id] } }, select: { id: true, unitSystem: true } });
+    expect(Object.fromEntries(rows.map((row) => [row.id, row.unitSystem]))).toEqual({ [viewer.id]: "us", [engineer.id]: "si" });
+    const event = await database.prisma.auditEvent.findFirstOrThrow({ where: { action: "user.units" }, orderBy: { id: "desc" } });
+    expect(event).toMatchObject({ actor: viewer.email, userId: viewer.id, entityId: viewer.id });
+    const invalid = await runAction(setUnitSystemAction as (...args: unknown[]) => Promise<unknown>, [form({ unitSystem: "imperial" })], viewer);
+    expect(invalid.redirect).toContain("error=");
   });
 });

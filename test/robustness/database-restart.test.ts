@@ -73,7 +73,6 @@ describe("createPrismaClient when an administrator terminates every session (pg_
     await client.connect();
     try {
       const result = await client.query<{ count: string }>("select count(*) from pg_stat_activity where datname = current_database() and query like '%pg_sleep%' and state = 'active' and pid <> pg_backend_pid()");
-      if (process.env.FOULCAST_DEBUG) console.info("sleeping", result.rows[0]?.count);
       return Number(result.rows[0]?.count ?? 0) >= count;
     } finally {
       await client.end();

@@ -1,6 +1,6 @@
 "use server";
 
-import { APIError } from "better-auth";
+import { isAPIError } from "better-auth/api";
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { getAuth } from "@/lib/auth/auth";
@@ -25,7 +25,8 @@ export async function signInAction(_previous: SignInState, formData: FormData): 
   try {
     await getAuth().api.signInEmail({ body: { email, password }, headers: await headers() });
   } catch (error) {
-    if (!(error instanceof APIError)) throw error;
+    // isAPIError, not instanceof: the error class may come from another copy of the library in the server bundle
+    if (!isAPIError(error)) throw error;
     throttle.recordFailure(email);
     return { error: "The email or the password is wrong.", email };
   }
@@ -38,7 +39,7 @@ export async function signOutAction(): Promise<void> {
   try {
     await getAuth().api.signOut({ headers: await headers() });
   } catch (error) {
-    if (!(error instanceof APIError)) throw error;
+    if (!isAPIError(error)) throw error;
   }
   redirect("/sign-in");
 }

@@ -9,6 +9,7 @@ import { registerDatabaseCommands } from "./cli/database-commands";
 import { registerImportCommands } from "./cli/import-commands";
 import { registerPlanCommands } from "./cli/plan-commands";
 import { registerQualityCommands } from "./cli/quality-commands";
+import { registerReassessCommands } from "./cli/reassess-commands";
 import { registerUserCommands } from "./cli/user-commands";
 
 const program = new Command()
@@ -22,6 +23,7 @@ registerAssetCommands(program);
 registerImportCommands(program);
 registerQualityCommands(program);
 registerAssessCommands(program);
+registerReassessCommands(program);
 registerCleaningCommands(program);
 registerPlanCommands(program);
 registerUserCommands(program);

@@ -10,6 +10,8 @@ import { DEMO_PASSWORD, seedDemoUsersIfNone } from "../lib/data/seed-demo-users"
 import { authSecret } from "../lib/auth/auth-secret";
 import { refreshFleet } from "../lib/data/refresh-fleet";
 import { disconnectPrisma, getPrisma } from "../lib/db";
+import { jobQueueSettings } from "../lib/jobs/job-queue-settings";
+import { runReassessWorker, type RunningWorker } from "../lib/jobs/run-reassess-worker";
 
 const dev = process.argv.includes("--dev");
 const skipBuild = process.argv.includes("--no-build") || process.env.FOULCAST_SKIP_BUILD === "1";
@@ -17,6 +19,7 @@ const port = process.env.PORT ?? "3000";
 const log = (message: string) => console.log(`[foulcast] ${message}`);
 
 let web: ChildProcess | null = null;
+let worker: RunningWorker | null = null;
 
 function run(command: string, args: string[], env: NodeJS.ProcessEnv): ChildProcess {
   return spawn(command, args, { stdio: "inherit", env });
@@ -38,6 +41,7 @@ exitHook((done) => {
       web.kill("SIGTERM");
       await waitForExit(web);
     }
+    await worker?.stop(15_000);
     await disconnectPrisma();
     await database.release();
     log("Web server stopped.");
@@ -67,7 +71,19 @@ await disconnectPrisma();
 // Make the session-signing secret now (unless BETTER_AUTH_SECRET is set), so the web server only reads it.
 authSecret();
 
-const env = { ...process.env, DATABASE_URL: database.url, NEXT_TELEMETRY_DISABLED: "1" };
+// Reassessments after web imports go to the job queue (FOULCAST_QUEUE=on for the web server unless set), taken by a
+// worker in this process (FOULCAST_WORKERS concurrent jobs, default 1; 0 when separate `npm run worker` processes run),
+// so a reassessment never holds up the web server's requests.
+const queueSettings = jobQueueSettings();
+if (queueSettings.inProcessWorkers > 0) {
+  worker = await runReassessWorker(database.url, {
+    concurrency: queueSettings.inProcessWorkers,
+    onJob: (outcome, milliseconds) => log(`Reassessed ${outcome.tag ?? `asset ${outcome.assetId}`} (queued job, ${(milliseconds / 1000).toFixed(1)} s)`),
+    onFailure: (data, error) => log(`Reassessment of ${data.tag} failed: ${error instanceof Error ? error.message : String(error)}`),
+  });
+  log(`Reassessment worker running (${queueSettings.inProcessWorkers} job(s) at a time; FOULCAST_WORKERS=0 turns it off).`);
+}
+const env = { ...process.env, DATABASE_URL: database.url, NEXT_TELEMETRY_DISABLED: "1", FOULCAST_QUEUE: process.env.FOULCAST_QUEUE ?? "on" };
 const next = "node_modules/.bin/next";
 if (!dev && !skipBuild) {
   log("Building the web app (next build)...");
@@ -81,5 +97,6 @@ log(`Serving on http://localhost:${port}`);
 web = run(next, [dev ? "dev" : "start", "-p", port], env);
 const code = await waitForExit(web);
 // The web server ended by itself (not through a signal): release the database too.
+await worker?.stop(15_000);
 await database.release();
 process.exit(code);

@@ -160,9 +160,10 @@ async function runImport(options: ImportCommandOptions): Promise<void> {
         onProgress: progressPrinter(size),
       });
       if (process.stderr.isTTY) process.stderr.write("\r\x1b[K");
-      const { reassessed } = await refreshAfterImport(getPrisma(), summary);
+      const { reassessed, queued } = await refreshAfterImport(getPrisma(), summary);
       if (!options.json && reassessed) console.log("Screening, instrument alerts and assessment recomputed.");
-      if (options.json) printJson({ ...summary, reassessed });
+      if (!options.json && queued) console.log("Reassessment queued for the workers (FOULCAST_QUEUE=on).");
+      if (options.json) printJson({ ...summary, reassessed, queued });
       else printSummary(summary);
       await writeRejects(summary.rejects);
     } catch (error) {

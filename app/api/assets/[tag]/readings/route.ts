@@ -84,11 +84,12 @@ export const POST = withRole("data.import", async (request: Request, { params }:
       mapping,
       options: { ...options, expectedBytes },
     });
-    const { reassessed } = await refreshAfterImport(getPrisma(), summary);
+    const { reassessed, queued } = await refreshAfterImport(getPrisma(), summary);
     return NextResponse.json(
       {
         ...summary,
         reassessed,
+        queued,
         rejects: summary.rejects.slice(0, REJECTS_IN_RESPONSE),
         batchUrl: `/api/imports/${summary.batchId}`,
         rejectsUrl: `/api/imports/${summary.batchId}/rejects.csv`,

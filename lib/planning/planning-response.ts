@@ -9,6 +9,7 @@ export async function planningResponse(work: () => Promise<Response>): Promise<R
   try {
     return await work();
   } catch (error) {
+    if (error instanceof BodyTooLarge) return Response.json({ error: error.message }, { status: 413 });
     if (error instanceof PlanningError) {
       const status = /^unknown |^no plan run|has no plan yet|no site in the database/.test(error.message) ? 404 : 400;
       return Response.json({ error: error.message }, { status });
@@ -19,10 +20,32 @@ export async function planningResponse(work: () => Promise<Response>): Promise<R
   }
 }
 
-/** The JSON body of a request, or a PlanningError naming what is wrong with it. */
+/** A body over the limit: answered 413 by planningResponse. */
+export class BodyTooLarge extends PlanningError {}
+
+/**
+ * The JSON body of a request, or a PlanningError naming what is wrong with it. The body is read as a stream and
+ * refused as soon as it passes `maximumBytes` (or at once when Content-Length says so), never buffered whole.
+ */
 export async function readJsonBody(request: Request, maximumBytes = 64 * 1024): Promise<unknown> {
-  const text = await request.text();
-  if (text.length > maximumBytes) throw new PlanningError(`request body is larger than ${maximumBytes} bytes`);
+  const declared = Number(request.headers.get("content-length") ?? NaN);
+  if (Number.isFinite(declared) && declared > maximumBytes) throw new BodyTooLarge(`request body is larger than ${maximumBytes} bytes`);
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  if (request.body) {
+    const reader = request.body.getReader();
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) break;
+      size += value.byteLength;
+      if (size > maximumBytes) {
+        await reader.cancel();
+        throw new BodyTooLarge(`request body is larger than ${maximumBytes} bytes`);
+      }
+      chunks.push(value);
+    }
+  }
+  const text = Buffer.concat(chunks).toString("utf8");
   if (!text.trim()) return {};
   try {
     return JSON.parse(text) as unknown;

@@ -65,6 +65,8 @@ describe("planner API", () => {
     expect(((await bad.json()) as { error: string }).error).toMatch(/fuelPriceFactor/);
     const notJson = await postPlan(request("/api/plan", planner, { method: "POST", body: "{oops" }), {});
     expect(notJson.status).toBe(400);
+    const huge = await postPlan(request("/api/plan", planner, { method: "POST", body: JSON.stringify({ site: "x".repeat(200_000) }) }), {});
+    expect(huge.status).toBe(413);
     const unknownKey = await postPlan(request("/api/plan", planner, { method: "POST", body: { horizon: 3 } }), {});
     expect(unknownKey.status).toBe(400);
     const badWeek = await postBooking(request("/api/plan/bookings", planner, { method: "POST", body: { action: "move", tag: "E-1101", week: "next tuesday" } }), {});

@@ -143,7 +143,7 @@ export default async function PlanPage({ searchParams }: { searchParams: SearchP
                     <td>{cleaning.window}</td>
                     <td className="num">{cleaning.outageDays}</td>
                     <td className="num">{formatMoney(cleaning.savingVsNoCleaning, currency)}</td>
-                    <td>{margin ? `${margin.crossing} (${margin.marginDays >= 0 ? `${Math.round(margin.marginDays)} d after start` : `${Math.round(-margin.marginDays)} d before start`})` : "beyond the forecast"}</td>
+                    <td>{margin ? `${margin.crossing} (${margin.marginDays >= 0 ? `starts ${Math.round(margin.marginDays)} d before it` : `starts ${Math.round(-margin.marginDays)} d after it: late`})` : "beyond the forecast"}</td>
                     <td>
                       <details><summary>{cleaning.explanation[1] ?? "explanation"}</summary><ul>{cleaning.explanation.map((line) => <li key={line}>{line}</li>)}</ul></details>
                     </td>

@@ -23,6 +23,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
               <nav aria-label="Main">
                 <Link href="/">Fleet</Link>
                 <Link href="/plan">Cleaning plan</Link>
+                <Link href="/reports">Reports</Link>
                 {can(user.role, "audit.read") ? <Link href="/audit">Audit log</Link> : null}
                 {can(user.role, "users.manage") ? <Link href="/admin/users">Users</Link> : null}
               </nav>

@@ -64,6 +64,20 @@ export function chromiumPath(env: Record<string, string | undefined> = process.e
   return env.CHROMIUM_PATH?.trim() || DEFAULT_CHROMIUM_PATH;
 }
 
+/**
+ * requireChromium: the executable path when it exists and may be executed.
+ *
+ * @throws ChromiumUnavailableError otherwise
+ */
+export async function requireChromium(executablePath: string = chromiumPath()): Promise<string> {
+  try {
+    await fs.access(executablePath, fs.constants.X_OK);
+  } catch {
+    throw new ChromiumUnavailableError(executablePath);
+  }
+  return executablePath;
+}
+
 /** Cookie pairs of a Cookie request header ("a=1; b=2"); malformed pairs are skipped. */
 export function parseCookieHeader(header: string | null): { name: string; value: string }[] {
   if (!header) return [];
@@ -100,12 +114,7 @@ async function withTimeout<T>(work: Promise<T>, timeoutMs: number, what: string)
  *   or a page without `readySelector`
  */
 export async function renderPdf(options: RenderPdfOptions): Promise<RenderedPdf> {
-  const executablePath = options.executablePath ?? chromiumPath();
-  try {
-    await fs.access(executablePath, fs.constants.X_OK);
-  } catch {
-    throw new ChromiumUnavailableError(executablePath);
-  }
+  const executablePath = await requireChromium(options.executablePath ?? chromiumPath());
   const started = performance.now();
   const timeoutMs = options.timeoutMs ?? DEFAULT_PDF_TIMEOUT_MS;
   let browser: Browser | undefined;

@@ -8,6 +8,7 @@ import { seedDemoFleetIfEmpty } from "../../lib/data/seed-demo-fleet";
 import { disconnectPrisma } from "../../lib/db";
 import type { AssessmentSummary } from "../../lib/planning/assessment-summary";
 import { previousMonth } from "../../lib/report/report-month";
+import { authenticatedRequest } from "../support/authenticated-request";
 import { createTestDatabase, type TestDatabase } from "../support/test-database";
 
 let database: TestDatabase;
@@ -15,6 +16,7 @@ const TAG = "E-1101";
 
 beforeAll(async () => {
   database = await createTestDatabase();
+  process.env.DATABASE_URL = database.url;
   await seedDemoFleetIfEmpty(database.prisma, { tags: [TAG] });
   await refreshDataQuality(database.prisma, TAG);
   await refreshAssessment(database.prisma, TAG);
@@ -50,7 +52,7 @@ describe("ensureMonthEndSnapshots", () => {
     // the November month end sees the same daily periods as the stored assessment (made 1 h later, at the end of the
     // data), so its fouling resistance agrees closely; October's is an assessment of different data
     const asset = await database.prisma.asset.findUniqueOrThrow({ where: { tag: TAG }, include: { assessment: true } });
-    const stored = asset.assessment?.summary as AssessmentSummary;
+    const stored = asset.assessment?.summary as unknown as AssessmentSummary;
     const november = first.get(asset.id)?.get(month.endMs);
     const october = first.get(asset.id)?.get(previousMonth(month).endMs);
     expect(november?.summary?.foulingM2KPerW).toBeCloseTo(stored.foulingM2KPerW ?? Number.NaN, 6);
@@ -83,4 +85,39 @@ describe("loadMonthlyReport", () => {
     const october = await loadMonthlyReport(database.prisma, { site, month: previousMonth(month) });
     expect(october.cleaningsDone.some((cleaning) => cleaning.method === "report test wash")).toBe(false);
   }, 120_000);
+});
+
+describe("GET /api/reports/monthly.pdf", () => {
+  type Handler = (request: Request, context: unknown) => Promise<Response>;
+  const call = async (query: string): Promise<Response> => {
+    const { GET } = (await import("../../app/api/reports/monthly.pdf/route")) as { GET: Handler };
+    return GET(await authenticatedRequest(`http://localhost:3000/api/reports/monthly.pdf${query}`, { role: "viewer" }), {});
+  };
+
+  it("names what is wrong with the request before starting a browser", async () => {
+    const badPaper = await call("?site=BWH&month=2026-11&paper=a3");
+    expect(badPaper.status).toBe(400);
+    expect(await badPaper.json()).toEqual({ code: "bad-request", error: 'paper must be one of a4, letter, got "a3"' });
+    const unknownSite = await call("?site=XYZ");
+    expect(unknownSite.status).toBe(404);
+    expect(await unknownSite.json()).toMatchObject({ code: "not-found", error: 'unknown site "XYZ"' });
+  });
+
+  it("answers 503 with the reason when Chromium is missing, before any month-end assessment", async () => {
+    const saved = process.env.CHROMIUM_PATH;
+    process.env.CHROMIUM_PATH = "/nonexistent/chromium";
+    try {
+      // a month with no snapshots yet: none may be made for a PDF that cannot be printed
+      const before = await database.prisma.monthEndSnapshot.count();
+      const response = await call("?site=BWH&month=2026-06&paper=letter");
+      expect(await database.prisma.monthEndSnapshot.count()).toBe(before);
+      expect(response.status).toBe(503);
+      const body = (await response.json()) as { code: string; error: string };
+      expect(body.code).toBe("chromium-unavailable");
+      expect(body.error).toContain("Chromium is not installed at /nonexistent/chromium");
+    } finally {
+      if (saved === undefined) delete process.env.CHROMIUM_PATH;
+      else process.env.CHROMIUM_PATH = saved;
+    }
+  }, 60_000);
 });

@@ -3,7 +3,7 @@ import { ensureMonthEndSnapshots } from "@/lib/data/ensure-month-end-snapshots";
 import { ReportError, resolveReportRequest } from "@/lib/data/monthly-report-data";
 import { getPrisma } from "@/lib/db";
 import { attachmentDisposition } from "@/lib/present/attachment-disposition";
-import { ChromiumUnavailableError, PAPERS, parseCookieHeader, PdfRenderError, renderPdf, type Paper } from "@/lib/report/render-pdf";
+import { ChromiumUnavailableError, PAPERS, parseCookieHeader, PdfRenderError, renderPdf, requireChromium, type Paper } from "@/lib/report/render-pdf";
 import { previousMonth } from "@/lib/report/report-month";
 
 export const dynamic = "force-dynamic";
@@ -36,10 +36,11 @@ export const GET = withRole("read", async (request: Request) => {
     throw error;
   }
   const { site, month } = resolved;
-  // The month-end assessments can take seconds the first time: do them here, outside the browser's page timeout.
-  await ensureMonthEndSnapshots(prisma, { siteCode: site.code, monthEnds: [month.endMs, previousMonth(month).endMs] });
   const url = `${reportOrigin()}/reports/monthly?site=${encodeURIComponent(site.code)}&month=${month.key}`;
   try {
+    await requireChromium();
+    // The month-end assessments can take seconds the first time: do them here, outside the browser's page timeout.
+    await ensureMonthEndSnapshots(prisma, { siteCode: site.code, monthEnds: [month.endMs, previousMonth(month).endMs] });
     const rendered = await renderPdf({
       source: { url, cookies: parseCookieHeader(request.headers.get("cookie")) },
       paper: paper as Paper,

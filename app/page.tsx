@@ -30,9 +30,11 @@ function ThresholdCell({ row }: { row: FleetHealthRow }) {
       return (
         <span className="dates">
           <strong>{threshold.p50 ? formatDate(threshold.p50, zone) : "beyond horizon"}</strong>
-          <span className="subtle range">
-            {formatDate(threshold.p10, zone)} – {threshold.p90 ? formatDate(threshold.p90, zone) : "later"}
-          </span>
+          {threshold.p10 || threshold.p90 ? (
+            <span className="subtle range">
+              {threshold.p10 ? formatDate(threshold.p10, zone) : "later"} – {threshold.p90 ? formatDate(threshold.p90, zone) : "later"}
+            </span>
+          ) : null}
         </span>
       );
   }
@@ -187,7 +189,7 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
                   <tr key={row.tag}>
                     <td>
                       <Link href={href} className="tag">{row.tag}</Link>
-                      <span className="subtle small">{row.name} · {row.unitCode} · {row.service}</span>
+                      <span className="subtle small">{row.name} · {row.unitCode}</span>
                     </td>
                     <td><FleetStatusMark status={row.status} /></td>
                     <td className="num">{summary?.percentOfClean == null ? "—" : `${formatSignificant(summary.percentOfClean, 3)} %`}</td>
@@ -196,8 +198,8 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
                     <td className="num">{summary?.economics ? formatMoney(summary.economics.costPerDay, summary.economics.currency) : <span className="subtle" title={summary?.economicsNote ?? undefined}>—</span>}</td>
                     <td><ThresholdCell row={row} /></td>
                     <td className="num">{row.openAlerts ? <Link href={`${href}#alerts`} className="alert-count" aria-label={`${row.openAlerts} open alerts on ${row.tag}`}>{row.openAlerts}</Link> : "—"}</td>
-                    <td>{formatDate(row.lastCleaning, row.siteTimeZone)}</td>
-                    <td>{row.nextCleaning ? <>{row.nextCleaning.start} <span className={row.nextCleaning.booked ? "pill booked" : "pill proposed"}>{row.nextCleaning.booked ? "booked" : "proposed"}</span></> : "—"}</td>
+                    <td className="date">{formatDate(row.lastCleaning, row.siteTimeZone)}</td>
+                    <td className="date">{row.nextCleaning ? <>{row.nextCleaning.start} <span className={row.nextCleaning.booked ? "pill booked" : "pill proposed"}>{row.nextCleaning.booked ? "booked" : "proposed"}</span></> : "—"}</td>
                     <td className="spark-cell"><RfSparkline points={summary?.sparkline ?? []} description={sparklineDescription(row, system)} /></td>
                   </tr>
                 );

@@ -2,14 +2,14 @@
 
 import { CartesianGrid, Legend, Line, LineChart, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { DailyReading } from "@/lib/data/daily-readings";
+import { displayUnit, toDisplay, type UnitSystem } from "@/lib/present/display-units";
 
-const KELVIN_OFFSET = 273.15; // 0 °C in kelvin (exact, SI definition of the degree Celsius)
-
-function celsius(kelvin: number | null): number | null {
-  return kelvin === null ? null : Math.round((kelvin - KELVIN_OFFSET) * 100) / 100;
-}
-
-export function DailyTemperatureChart({ data }: { data: DailyReading[] }) {
+export function DailyTemperatureChart({ data, system = "si" }: { data: DailyReading[]; system?: UnitSystem }) {
+  const unit = displayUnit(system, "temperature").label;
+  const celsius = (kelvin: number | null) => {
+    const value = toDisplay(system, "temperature", kelvin);
+    return value === null ? null : Math.round(value * 100) / 100;
+  };
   const series = data.map((day) => ({
     day: day.day,
     hotIn: celsius(day.hotInK),
@@ -23,8 +23,8 @@ export function DailyTemperatureChart({ data }: { data: DailyReading[] }) {
         <LineChart data={series} margin={{ top: 8, right: 16, bottom: 8, left: 8 }}>
           <CartesianGrid stroke="#e3e7ee" />
           <XAxis dataKey="day" minTickGap={40} />
-          <YAxis unit=" °C" width={70} />
-          <Tooltip formatter={(value) => `${String(value)} °C`} />
+          <YAxis unit={` ${unit}`} width={70} />
+          <Tooltip formatter={(value) => `${String(value)} ${unit}`} />
           <Legend />
           <Line type="monotone" dataKey="hotIn" name="Hot in" stroke="#b2372b" dot={false} isAnimationActive={false} />
           <Line type="monotone" dataKey="hotOut" name="Hot out" stroke="#e0876a" dot={false} isAnimationActive={false} />

@@ -69,6 +69,24 @@ export interface AssetChartsSI {
   cycles: { index: number; startMs: number; current: boolean; points: { days: number; rf: number }[] }[];
 }
 
+export type ClosureSeriesPoint = AssetChartsSI["closure"]["points"][number];
+
+/** closureSeries: daily closure (as %) of the periods that have one, with the labels of the alerts active that day. */
+export function closureSeries(
+  periods: readonly Pick<ChartPeriod, "startMs" | "closure" | "usable" | "reason">[],
+  alerts: readonly ChartAlert[],
+): ClosureSeriesPoint[] {
+  return periods
+    .filter((period) => period.closure !== null && Number.isFinite(period.closure))
+    .map((period) => ({
+      timeMs: period.startMs,
+      closurePercent: (period.closure as number) * 100,
+      usable: period.usable,
+      reason: period.reason,
+      alerts: alerts.filter((alert) => alert.startMs < period.startMs + DAY_MS && alert.endMs > period.startMs).map((alert) => alert.label),
+    }));
+}
+
 /** Daily periods are stamped at their start; the assessment places each day at mid-day, and so do the charts. */
 const HALF_DAY_MS = DAY_MS / 2;
 
@@ -133,15 +151,7 @@ export function assetChartsSI(inputs: AssetChartInputs): AssetChartsSI {
 
   const lastPeriod = inputs.periods[inputs.periods.length - 1];
   const endMs = lastPeriod ? lastPeriod.startMs + DAY_MS : asOfMs;
-  const closurePoints = inputs.periods
-    .filter((period) => period.closure !== null && Number.isFinite(period.closure))
-    .map((period) => ({
-      timeMs: period.startMs,
-      closurePercent: (period.closure as number) * 100,
-      usable: period.usable,
-      reason: period.reason,
-      alerts: inputs.alerts.filter((alert) => alert.startMs < period.startMs + DAY_MS && alert.endMs > period.startMs).map((alert) => alert.label),
-    }));
+  const closurePoints = closureSeries(inputs.periods, inputs.alerts);
 
   const cycles = assessment.cycles.map((cycle) => {
     const startMs = Date.parse(cycle.start);

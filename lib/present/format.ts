@@ -7,6 +7,8 @@ export function formatSignificant(value: number, digits = 3): string {
   if (value === 0) return "0";
   const magnitude = Math.floor(Math.log10(Math.abs(value)));
   const decimals = Math.max(0, digits - 1 - magnitude);
+  // Intl allows at most 100 fraction digits; tiny values (e.g. an Akaike weight of 1e-150) read better as exponents.
+  if (decimals > 20) return value.toExponential(Math.max(0, digits - 1));
   return value.toLocaleString("en-US", { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
 }
 

@@ -10,13 +10,18 @@ import { listPeriods } from "@/lib/data/list-periods";
 import { ClosureChart } from "@/app/_components/closure-chart";
 import { acknowledgeAlertAction } from "./alert-actions";
 import { recordCleaningAction } from "./cleaning-actions";
-import { FoulingChart } from "@/app/_components/fouling-chart";
 import { getStoredAssessment } from "@/lib/data/refresh-assessment";
-import type { Assessment } from "@/lib/core/assessment";
 import { getPrisma } from "@/lib/db";
 import { requireSignedInUser } from "@/lib/auth/current-user";
 import { can } from "@/lib/auth/permissions";
-import { describeArrangement, formatDate, formatDutyMW, formatSignificant, formatTemperatureC } from "@/lib/present/format";
+import { describeArrangement, formatDate, formatSignificant } from "@/lib/present/format";
+import { formatQuantity } from "@/lib/present/display-units";
+import { closureSeries, displayAssetCharts } from "@/lib/present/asset-charts";
+import { buildAssetCharts, chartAlerts } from "@/lib/data/load-asset-charts";
+import { economicsSummary } from "@/lib/planning/economics-summary";
+import { AnalysisCharts, csvHref } from "./analysis-charts";
+import { EconomicsPanel } from "./economics-panel";
+import { ModelCard } from "./model-card";
 
 export const dynamic = "force-dynamic";
 
@@ -38,14 +43,6 @@ function describeHeatCapacity(kind: string, intercept: number, slope: number): s
 }
 
 const ROLE_ORDER = Object.keys(ROLE_LABELS);
-
-/** Forecast band shown on the chart: up to 60 days past the P90 duty crossing, at least one year, at most the horizon. */
-function chartBand(assessment: Assessment) {
-  const band = assessment.trend?.band ?? [];
-  const p90 = assessment.forecasts.duty.p90Ms;
-  const until = Math.max(assessment.asOfMs + 365 * 86_400_000, (p90 ?? 0) + 60 * 86_400_000);
-  return band.filter((point) => point.timeMs <= until);
-}
 
 function describeChange(field: string, change: { before: unknown; after: unknown }): string {
   const show = (value: unknown) => (typeof value === "number" ? formatSignificant(value, 6) : value === null ? "—" : typeof value === "object" ? "(list)" : String(value));
@@ -77,6 +74,10 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
   const samplesUsed = periods.reduce((sum, period) => sum + period.samplesUsed, 0);
   const instruments = [...asset.instruments].sort((a, b) => ROLE_ORDER.indexOf(a.role) - ROLE_ORDER.indexOf(b.role));
   const timeZone = asset.unit.site.timeZone;
+  const system = user.unitSystem;
+  const alertSpans = chartAlerts(alerts, lastPeriodMs);
+  const charts = assessment ? displayAssetCharts(await buildAssetCharts(prisma, asset, assessment, alerts), system) : null;
+  const economics = assessment ? economicsSummary(asset, asset.unit.site, { result: assessment as never }) : { ok: false as const, reason: "not assessed yet" };
   return (
     <>
       <p className="subtle"><Link href="/">Fleet</Link> / {asset.unit.name}</p>
@@ -94,11 +95,11 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
           <dl className="facts">
             <dt>Service</dt><dd>{asset.service}</dd>
             <dt>Arrangement</dt><dd>{describeArrangement(asset.arrangementKind, asset.shells, asset.tubePasses)}{asset.mixedStream ? ` (${asset.mixedStream} stream mixed)` : ""}</dd>
-            <dt>Area</dt><dd>{formatSignificant(asset.areaM2, 3)} m²</dd>
-            <dt>Design duty</dt><dd>{formatDutyMW(asset.designDutyW)}</dd>
-            <dt>Design U</dt><dd>{formatSignificant(asset.designUWPerM2K, 3)} W/(m²·K)</dd>
-            <dt>Design fouling</dt><dd>{formatSignificant(asset.designFoulingM2KPerW, 2)} m²·K/W</dd>
-            <dt>Duty threshold</dt><dd>{formatDutyMW(asset.dutyThresholdW)}</dd>
+            <dt>Area</dt><dd>{formatQuantity(system, "area", asset.areaM2, 3)}</dd>
+            <dt>Design duty</dt><dd>{formatQuantity(system, "duty", asset.designDutyW, 3)}</dd>
+            <dt>Design U</dt><dd>{formatQuantity(system, "u", asset.designUWPerM2K, 3)}</dd>
+            <dt>Design fouling</dt><dd>{formatQuantity(system, "foulingResistance", asset.designFoulingM2KPerW, 2)}</dd>
+            <dt>Duty threshold</dt><dd>{formatQuantity(system, "duty", asset.dutyThresholdW, 3)}</dd>
           </dl>
         </section>
         <section className="panel" aria-labelledby="streams-heading">
@@ -106,8 +107,8 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
           <dl className="facts">
             <dt>Hot stream</dt><dd>{asset.hotStreamName}; {describeHeatCapacity(asset.hotCpKind, asset.hotCpIntercept, asset.hotCpSlope)}</dd>
             <dt>Cold stream</dt><dd>{asset.coldStreamName}; {describeHeatCapacity(asset.coldCpKind, asset.coldCpIntercept, asset.coldCpSlope)}</dd>
-            <dt>Hot inlet</dt><dd>{formatTemperatureC(asset.refHotInletK)}, {formatSignificant(asset.refHotFlowKgPerS, 3)} kg/s</dd>
-            <dt>Cold inlet</dt><dd>{formatTemperatureC(asset.refColdInletK)}, {formatSignificant(asset.refColdFlowKgPerS, 3)} kg/s</dd>
+            <dt>Hot inlet</dt><dd>{formatQuantity(system, "temperature", asset.refHotInletK, 4)}, {formatQuantity(system, "massFlow", asset.refHotFlowKgPerS, 3)}</dd>
+            <dt>Cold inlet</dt><dd>{formatQuantity(system, "temperature", asset.refColdInletK, 4)}, {formatQuantity(system, "massFlow", asset.refColdFlowKgPerS, 3)}</dd>
           </dl>
         </section>
         <section className="panel" aria-labelledby="instruments-heading">
@@ -127,19 +128,19 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
         </section>
       </div>
       <h2>Fouling assessment</h2>
-      {assessment === null ? (
+      {assessment === null || charts === null ? (
         <p className="subtle">Not assessed yet: no usable screened data.</p>
       ) : (
         <>
-          <div className="columns">
+          <div className="columns align-start">
             <section className="panel" aria-labelledby="condition-heading">
               <h3 id="condition-heading">Condition as of {formatDate(assessment.asOf, timeZone)}</h3>
               <dl className="facts">
-                <dt>Observed U</dt><dd>{assessment.currentObservedU ? `${formatSignificant(assessment.currentObservedU.uWPerM2K, 3)} W/(m²·K), ${formatSignificant(assessment.currentObservedU.percentOfClean, 3)} % of clean` : "—"}</dd>
-                <dt>Fouling resistance</dt><dd>{assessment.foulingResistance.current === null ? "—" : `${formatSignificant(assessment.foulingResistance.current, 3)} m²·K/W`}</dd>
-                <dt>Duty at reference</dt><dd>{assessment.referenceDuty.currentW === null ? "—" : `${formatDutyMW(assessment.referenceDuty.currentW)} (clean ${formatDutyMW(assessment.referenceDuty.cleanW)})`}</dd>
-                <dt>Duty loss</dt><dd>{assessment.referenceDuty.lossW === null ? "—" : `${formatSignificant(assessment.referenceDuty.lossW / 1e3, 3)} kW`}</dd>
-                <dt>Energy lost this cycle</dt><dd>{assessment.referenceDuty.lossEnergyJ === null ? "—" : `${formatSignificant(assessment.referenceDuty.lossEnergyJ / 3.6e9, 3)} MWh`}</dd>
+                <dt>Observed U</dt><dd>{assessment.currentObservedU ? `${formatQuantity(system, "u", assessment.currentObservedU.uWPerM2K, 3)}, ${formatSignificant(assessment.currentObservedU.percentOfClean, 3)} % of clean` : "—"}</dd>
+                <dt>Fouling resistance</dt><dd>{assessment.foulingResistance.current === null ? "—" : formatQuantity(system, "foulingResistance", assessment.foulingResistance.current, 3)}</dd>
+                <dt>Duty at reference</dt><dd>{assessment.referenceDuty.currentW === null ? "—" : `${formatQuantity(system, "duty", assessment.referenceDuty.currentW, 3)} (clean ${formatQuantity(system, "duty", assessment.referenceDuty.cleanW, 3)})`}</dd>
+                <dt>Duty loss</dt><dd>{assessment.referenceDuty.lossW === null ? "—" : formatQuantity(system, "duty", assessment.referenceDuty.lossW, 3)}</dd>
+                <dt>Energy lost this cycle</dt><dd>{assessment.referenceDuty.lossEnergyJ === null ? "—" : formatQuantity(system, "energy", assessment.referenceDuty.lossEnergyJ, 3)}</dd>
               </dl>
             </section>
             <section className="panel" aria-labelledby="forecast-heading">
@@ -160,44 +161,11 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
               </table>
               <p className="subtle">P10 is the early date: a 10 % chance the limit is reached by then.</p>
             </section>
-            <section className="panel" aria-labelledby="model-heading">
-              <h3 id="model-heading">Model card</h3>
-              {assessment.cleanModel ? (
-                <table className="grid">
-                  <thead><tr><th scope="col">Clean-U parameter</th><th scope="col" className="num">Estimate</th><th scope="col" className="num">Std. error</th></tr></thead>
-                  <tbody>
-                    {([
-                      ["Hot film resistance at ref. flow (m²·K/W)", assessment.cleanModel.parameters.hotFilmResistanceRefM2KPerW, assessment.cleanModel.standardErrors.hotFilm],
-                      ["Cold film resistance at ref. flow (m²·K/W)", assessment.cleanModel.parameters.coldFilmResistanceRefM2KPerW, assessment.cleanModel.standardErrors.coldFilm],
-                      ["Wall resistance (m²·K/W)", assessment.cleanModel.parameters.wallResistanceM2KPerW, assessment.cleanModel.standardErrors.wall],
-                      ["Hot flow exponent", assessment.cleanModel.parameters.exponentHot, assessment.cleanModel.standardErrors.exponentHot],
-                      ["Cold flow exponent", assessment.cleanModel.parameters.exponentCold, assessment.cleanModel.standardErrors.exponentCold],
-                    ] as const).map(([label, value, error]) => (
-                      <tr key={label}><td>{label}</td><td className="num">{formatSignificant(value, 3)}</td><td className="num">{error === null ? "fixed" : formatSignificant(error, 2)}</td></tr>
-                    ))}
-                  </tbody>
-                </table>
-              ) : <p className="subtle">No clean-U model could be fitted.</p>}
-              <dl className="facts">
-                <dt>Clean U at reference</dt><dd>{assessment.cleanModel ? `${formatSignificant(assessment.cleanModel.cleanUAtReferenceWPerM2K, 3)} W/(m²·K)` : "—"}</dd>
-                <dt>Fit (estimation / validation)</dt><dd>{assessment.cleanModel ? `${formatSignificant(assessment.cleanModel.fitPercent.estimation ?? Number.NaN, 3)} % / ${formatSignificant(assessment.cleanModel.fitPercent.validation ?? Number.NaN, 3)} %` : "—"}</dd>
-                <dt>Trend model</dt><dd>{assessment.trend ? `${assessment.trend.model}: ${assessment.trend.reason}${assessment.trend.priorUsed ? ` Prior from cycles ${assessment.trend.priorUsed.sourceCycles.join(", ")}.` : ""}` : "—"}</dd>
-                <dt>Data used</dt><dd>{periods.filter((period) => period.usable).length} usable days of {periods.length}</dd>
-              </dl>
-              {assessment.notes.length ? <ul className="subtle">{assessment.notes.map((note) => <li key={note}>{note}</li>)}</ul> : null}
-            </section>
+            <EconomicsPanel economics={economics.ok ? economics.summary : null} reason={economics.ok ? null : economics.reason} asset={asset} site={asset.unit.site} system={system} />
           </div>
-          <div className="panel">
-            <FoulingChart
-              data={{
-                observed: assessment.foulingResistance.series.map((point) => ({ timeMs: point.timeMs, rf: point.foulingM2KPerW, cycle: point.cycle })),
-                band: chartBand(assessment),
-                criticalRf: assessment.forecasts.duty.criticalFoulingM2KPerW,
-                designRf: asset.designFoulingM2KPerW,
-                asOfMs: assessment.asOfMs,
-              }}
-            />
-          </div>
+          <h2 id="analysis">Analysis</h2>
+          <AnalysisCharts tag={asset.tag} charts={charts} timeZone={timeZone} />
+          <ModelCard assessment={assessment} periods={periods} system={system} />
         </>
       )}
 
@@ -248,20 +216,22 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
           <>
             <p className="subtle">
               {periods.filter((period) => period.usable).length} of {periods.length} days usable; samples used {samplesUsed.toLocaleString("en-US")} of {samplesTotal.toLocaleString("en-US")}
-              {" "}(not used: {Object.entries(excludedTotals).map(([reason, count]) => `${reason} ${count.toLocaleString("en-US")}`).join(", ")}). Closure = (hot duty − cold duty)/mean duty; shaded spans are instrument alerts.
+              {" "}(not used: {Object.entries(excludedTotals).map(([reason, count]) => `${reason} ${count.toLocaleString("en-US")}`).join(", ")}). Closure = (hot duty − cold duty)/mean duty; shaded spans flagged ⚑ are instrument alerts.
             </p>
             <ClosureChart
               endMs={lastPeriodMs}
-              points={periods.filter((period) => period.closure !== null).map((period) => ({ timeMs: Date.parse(period.start), closurePercent: (period.closure ?? 0) * 100, usable: period.usable }))}
-              alerts={alerts.map((alert) => ({ id: alert.id, label: `${alert.instrumentTag} ${alert.kind}`, startMs: Date.parse(alert.start), endMs: alert.end ? Date.parse(alert.end) : lastPeriodMs }))}
+              points={closureSeries(periods.map((period) => ({ startMs: Date.parse(period.start), closure: period.closure, usable: period.usable, reason: period.reason })), alertSpans)}
+              alerts={alertSpans}
+              timeZone={timeZone}
             />
+            {charts ? <p><a href={csvHref(asset.tag, "closure")} download>Download data (CSV)</a></p> : null}
           </>
         )}
       </div>
 
       <h2>Daily mean temperatures (raw readings, unscreened)</h2>
       <div className="panel">
-        {daily.length === 0 ? <p className="empty">No operating data imported yet.</p> : <DailyTemperatureChart data={daily} />}
+        {daily.length === 0 ? <p className="empty">No operating data imported yet.</p> : <DailyTemperatureChart data={daily} system={system} />}
       </div>
       <h2>Cleanings</h2>
       {asset.cleanings.length === 0 ? (

@@ -9,6 +9,8 @@ export const PAPERS: readonly Paper[] = ["a4", "letter"];
 export const DEFAULT_CHROMIUM_PATH = "/usr/bin/chromium";
 /** Whole render (launch, load, print) must finish within this, ms. */
 export const DEFAULT_PDF_TIMEOUT_MS = 60_000;
+/** How long a loaded page may take to show `readySelector`, ms. */
+const READY_WAIT_MS = 15_000;
 
 /**
  * Launch flags: no sandbox (containers and root), no GPU, /tmp instead of a small /dev/shm, and no background
@@ -45,8 +47,10 @@ export interface RenderPdfOptions {
   /** What to print: a page URL (loaded with `cookies`) or a complete HTML document. */
   source: { url: string; cookies?: { name: string; value: string }[] } | { html: string };
   paper: Paper;
-  /** A CSS selector that only the expected page has; printing refuses without it (e.g. after a redirect to sign-in). */
+  /** A CSS selector that only the expected page has; printing waits until it is visible and refuses without it (e.g. after a redirect to sign-in). */
   readySelector?: string;
+  /** How long a loaded page may take to show `readySelector`, ms [15,000]. */
+  readyTimeoutMs?: number;
   /** Small grey footer: this text on the left, "page n of N" on the right. */
   footerText?: string;
   timeoutMs?: number;
@@ -107,7 +111,8 @@ async function withTimeout<T>(work: Promise<T>, timeoutMs: number, what: string)
 
 /**
  * renderPdf: one headless Chromium per call (closed afterwards, also on failure): loads the page, or sets the HTML,
- * waits for `readySelector`, and prints it with the page's print styles on A4 or Letter, backgrounds included.
+ * waits until `readySelector` is visible (not only present in a hidden streaming template), and prints it with the
+ * page's print styles on A4 or Letter, backgrounds included.
  * Cookies are set for the URL's origin only (host-only, path /); `__Secure-`/`__Host-` cookies keep their Secure flag.
  *
  * @throws ChromiumUnavailableError when the executable is missing; PdfRenderError on timeout, an HTTP error status
@@ -123,6 +128,8 @@ export async function renderPdf(options: RenderPdfOptions): Promise<RenderedPdf>
     browser = await chromium.launch({ executablePath, headless: true, args: CHROMIUM_ARGS, timeout: timeoutMs });
     // a launch that outlived the timeout closes its own browser
     if (settled) await browser.close();
+    // JavaScript stays on: a streamed page (a loading.tsx boundary) shows its content only after Next's inline
+    // scripts move it out of the hidden streaming template.
     const context = await browser.newContext();
     const page = await context.newPage();
     page.setDefaultTimeout(timeoutMs);
@@ -147,11 +154,19 @@ export async function renderPdf(options: RenderPdfOptions): Promise<RenderedPdf>
     } else {
       await page.setContent(options.source.html, { waitUntil: "load" });
     }
-    if (options.readySelector && (await page.locator(options.readySelector).count()) === 0) {
+    const ready = options.readySelector
+      ? await page
+          .locator(options.readySelector)
+          .first()
+          .waitFor({ state: "visible", timeout: Math.min(timeoutMs, options.readyTimeoutMs ?? READY_WAIT_MS) })
+          .then(() => true)
+          .catch(() => false)
+      : true;
+    if (!ready) {
       const landed = new URL(page.url());
       const title = await page.title().catch(() => "");
       throw new PdfRenderError(
-        landed.pathname.startsWith("/sign-in") ? "the page asked for a sign-in: the session did not reach it" : `the page "${title}" at ${landed.pathname} has no ${options.readySelector} (it is not the expected page)`,
+        landed.pathname.startsWith("/sign-in") ? "the page asked for a sign-in: the session did not reach it" : `the page "${title}" (${landed.href}) shows no ${options.readySelector}: it is not the expected page, or not finished`,
       );
     }
     const footer = options.footerText ?? "";

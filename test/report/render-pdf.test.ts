@@ -8,7 +8,7 @@ import { MonthlyReportView } from "../../app/_components/monthly-report-view";
 import type { AssessmentSummary } from "../../lib/planning/assessment-summary";
 import { FLEET_STATUSES } from "../../lib/planning/fleet-status";
 import { monthlyReport, type MonthlyReport, type MonthlyReportInput } from "../../lib/report/monthly-report";
-import { ChromiumUnavailableError, chromiumPath, parseCookieHeader, renderPdf, type Paper } from "../../lib/report/render-pdf";
+import { ChromiumUnavailableError, chromiumPath, parseCookieHeader, PdfRenderError, renderPdf, type Paper } from "../../lib/report/render-pdf";
 import { reportMonth } from "../../lib/report/report-month";
 
 const CHROMIUM = chromiumPath();
@@ -168,6 +168,15 @@ describe.skipIf(!HAVE_CHROMIUM)("renderPdf of the monthly report (Chromium)", ()
     expect(text).not.toContain("NAVIGATION CHROME");
     expect(text).not.toContain("PDF (A4)");
   });
+
+  it("refuses to print a page whose expected content is still hidden (a streaming template)", async () => {
+    const html = `<!doctype html><html><head><title>Loading page</title></head><body><p>Loading…</p><div hidden><article data-report-month="2026-11">late</article></div></body></html>`;
+    const attempt = renderPdf({ source: { html }, paper: "a4", readySelector: "[data-report-month='2026-11']", readyTimeoutMs: 1_000 });
+    await expect(attempt).rejects.toBeInstanceOf(PdfRenderError);
+    await expect(renderPdf({ source: { html }, paper: "a4", readySelector: "[data-report-month='2026-11']", readyTimeoutMs: 1_000 })).rejects.toThrow(
+      `the page "Loading page" (about:blank) shows no [data-report-month='2026-11']`,
+    );
+  }, 60_000);
 
   it("takes a few seconds, not minutes", () => {
     // one browser launch, load and print each; generous on a busy 2-core machine

@@ -14,6 +14,11 @@ function Change({ value, format, risingIsWorse = true }: { value: number; format
   return <span className={`change ${worse ? "change-worse" : "change-better"}`}>{value > 0 ? "+" : "−"}{format(Math.abs(value))}</span>;
 }
 
+/** A power change: MW from 0.1 MW up, kW below (a change of −0.004 MW reads better as −3.97 kW). */
+function formatPowerChange(watts: number): string {
+  return Math.abs(watts) >= 1e5 ? formatDutyMW(watts) : `${formatSignificant(watts / 1e3, 3)} kW`;
+}
+
 function percent(value: number | null): string {
   return value === null ? "—" : `${formatSignificant(value, 3)} %`;
 }
@@ -59,12 +64,12 @@ function Condition({ report }: { report: MonthlyReport }) {
         <div className="tile">
           <div className="label">Duty lost at reference conditions</div>
           <div className="value">{formatDutyMW(totals.dutyLossW)}</div>
-          <Change value={totals.dutyLossW - totals.previousDutyLossW} format={formatDutyMW} /> <span className="subtle change">vs {before.label}</span>
+          <Change value={totals.dutyLossW - totals.previousDutyLossW} format={formatPowerChange} /> <span className="subtle change">vs {before.label}</span>
         </div>
         <div className="tile">
           <div className="label">{FLEET_STATUS_LABELS["act-now"]}</div>
           <div className="value">{actNow?.count ?? 0}</div>
-          <Change value={(actNow?.count ?? 0) - (actNow?.previousCount ?? 0)} format={(value) => String(value)} /> <span className="subtle change">exchangers</span>
+          <Change value={(actNow?.count ?? 0) - (actNow?.previousCount ?? 0)} format={(value) => String(value)} /> <span className="subtle change">vs {before.label}</span>
         </div>
         <div className="tile">
           <div className="label">Instrument alerts open at month end</div>

@@ -21,7 +21,7 @@ export function CyclesChart({ cycles, unit, timeZone }: CyclesChartProps) {
         <LineChart margin={{ top: 16, right: 16, bottom: 16, left: 8 }}>
           <CartesianGrid stroke={CHART_COLOURS.grid} />
           <XAxis type="number" dataKey="days" domain={[0, "dataMax"]} tickFormatter={tick} allowDuplicatedCategory={false} label={{ value: "days since cycle start", position: "insideBottom", offset: -8, fontSize: 12 }} />
-          <YAxis width={76} tickFormatter={tick} />
+          <YAxis width={84} tickFormatter={tick} />
           <Tooltip labelFormatter={(value) => `day ${tick(value)}`} formatter={(value, name) => [withUnit(value, unit), name]} />
           <Legend verticalAlign="top" />
           {cycles.map((cycle, position) => (

@@ -2,6 +2,7 @@
 
 import { Area, CartesianGrid, ComposedChart, Legend, Line, ReferenceLine, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
 import { CHART_COLOURS, dayIn, smallDot, tick, withUnit } from "./chart-format";
+import { SeriesTooltip } from "./chart-tooltip";
 
 export interface DutyChartData {
   observed: { timeMs: number; duty: number }[];
@@ -52,16 +53,8 @@ export function DutyChart({ data }: { data: DutyChartData }) {
         <ComposedChart data={rows} margin={{ top: 20, right: 16, bottom: 8, left: 8 }}>
           <CartesianGrid stroke={CHART_COLOURS.grid} />
           <XAxis type="number" dataKey="timeMs" domain={["dataMin", "dataMax"]} scale="time" tickFormatter={day} minTickGap={40} />
-          <YAxis width={76} tickFormatter={tick} domain={domain} allowDataOverflow type="number" />
-          <Tooltip
-            labelFormatter={(value) => day(Number(value))}
-            formatter={(value, name, item) => {
-              const payload = (item as { payload?: { edges80?: string; edges95?: string } }).payload;
-              if (name === "80 % band") return [`${payload?.edges80 ?? ""} ${data.unit}`, name];
-              if (name === "95 % band") return [`${payload?.edges95 ?? ""} ${data.unit}`, name];
-              return [withUnit(value, data.unit), name];
-            }}
-          />
+          <YAxis width={84} tickFormatter={tick} domain={domain} allowDataOverflow type="number" />
+          <Tooltip content={(props) => <SeriesTooltip active={props.active} payload={props.payload as never} label={props.label} unit={data.unit} formatLabel={day} />} />
           <Legend />
           <Area type="monotone" dataKey="base95" stackId="band95" stroke="none" fill="transparent" legendType="none" tooltipType="none" isAnimationActive={false} />
           <Area type="monotone" dataKey="span95" stackId="band95" name="95 % band" stroke="none" fill={CHART_COLOURS.band95} fillOpacity={0.8} isAnimationActive={false} />

@@ -1,7 +1,8 @@
 "use client";
 
 import { Area, CartesianGrid, ComposedChart, Legend, Line, ReferenceLine, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
-import { CHART_COLOURS, dayIn, smallDot, tick, withUnit } from "./chart-format";
+import { CHART_COLOURS, dayIn, smallDot, tick } from "./chart-format";
+import { SeriesTooltip } from "./chart-tooltip";
 
 export interface FoulingChartData {
   observed: { timeMs: number; rf: number; cycle: number }[];
@@ -37,16 +38,8 @@ export function FoulingChart({ data }: { data: FoulingChartData }) {
         <ComposedChart data={rows} margin={{ top: 16, right: 16, bottom: 8, left: 8 }}>
           <CartesianGrid stroke={CHART_COLOURS.grid} />
           <XAxis type="number" dataKey="timeMs" domain={["dataMin", "dataMax"]} scale="time" tickFormatter={day} minTickGap={40} />
-          <YAxis width={76} tickFormatter={tick} />
-          <Tooltip
-            labelFormatter={(value) => day(Number(value))}
-            formatter={(value, name, item) => {
-              const payload = (item as { payload?: { edges80?: string; edges95?: string } }).payload;
-              if (name === "80 % band") return [`${payload?.edges80 ?? ""} ${data.unit}`, name];
-              if (name === "95 % band") return [`${payload?.edges95 ?? ""} ${data.unit}`, name];
-              return [withUnit(value, data.unit), name];
-            }}
-          />
+          <YAxis width={84} tickFormatter={tick} />
+          <Tooltip content={(props) => <SeriesTooltip active={props.active} payload={props.payload as never} label={props.label} unit={data.unit} formatLabel={day} />} />
           <Legend />
           <Area type="monotone" dataKey="base95" stackId="band95" stroke="none" fill="transparent" legendType="none" tooltipType="none" isAnimationActive={false} />
           <Area type="monotone" dataKey="span95" stackId="band95" name="95 % band" stroke="none" fill={CHART_COLOURS.band95} fillOpacity={0.8} isAnimationActive={false} />

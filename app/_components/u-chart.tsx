@@ -1,7 +1,8 @@
 "use client";
 
 import { CartesianGrid, ComposedChart, Legend, Line, ReferenceLine, ResponsiveContainer, Scatter, Tooltip, XAxis, YAxis } from "recharts";
-import { CHART_COLOURS, dayIn, smallDot, tick, withUnit } from "./chart-format";
+import { CHART_COLOURS, dayIn, smallDot, tick } from "./chart-format";
+import { SeriesTooltip } from "./chart-tooltip";
 
 export interface UChartProps {
   points: { timeMs: number; observed: number; clean: number }[];
@@ -19,8 +20,8 @@ export function UChart({ points, cleaningsMs, unit, timeZone }: UChartProps) {
         <ComposedChart data={points} margin={{ top: 16, right: 16, bottom: 8, left: 8 }}>
           <CartesianGrid stroke={CHART_COLOURS.grid} />
           <XAxis type="number" dataKey="timeMs" domain={["dataMin", "dataMax"]} scale="time" tickFormatter={day} minTickGap={40} />
-          <YAxis width={76} tickFormatter={tick} />
-          <Tooltip labelFormatter={(value) => day(Number(value))} formatter={(value, name) => [withUnit(value, unit), name]} />
+          <YAxis width={84} tickFormatter={tick} />
+          <Tooltip content={(props) => <SeriesTooltip active={props.active} payload={props.payload as never} label={props.label} unit={unit} formatLabel={day} />} />
           <Legend />
           <Scatter dataKey="observed" name="Observed U" fill={CHART_COLOURS.observed} shape={smallDot} isAnimationActive={false} />
           <Line dataKey="clean" name="Clean-model U (same flows)" stroke={CHART_COLOURS.model} dot={false} strokeWidth={1.5} isAnimationActive={false} />

@@ -120,7 +120,7 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
                 <tr key={instrument.id}>
                   <td>{ROLE_LABELS[instrument.role] ?? instrument.role}</td>
                   <td>{instrument.tag}</td>
-                  <td className="num">{formatSignificant(instrument.standardUncertainty, 2)} {instrument.role.endsWith("Flow") ? "kg/s" : instrument.role.endsWith("PressureDrop") ? "Pa" : "K"}</td>
+                  <td className="num">{instrument.role.endsWith("Flow") ? formatQuantity(system, "massFlow", instrument.standardUncertainty, 2) : instrument.role.endsWith("PressureDrop") ? `${formatSignificant(instrument.standardUncertainty, 2)} Pa` : formatQuantity(system, "temperatureDifference", instrument.standardUncertainty, 2)}</td>
                 </tr>
               ))}
             </tbody>

@@ -9,7 +9,13 @@ import { DEMO_PASSWORD, demoUserEmail } from "../../lib/data/seed-demo-users";
 import { chromiumPath, startE2eApp, type E2eApp } from "./support/e2e-app";
 
 const executablePath = chromiumPath();
-if (!executablePath) console.warn("[e2e] Chromium not found (set CHROMIUM_PATH, or apt-get install chromium): browser tests skipped");
+if (!executablePath) {
+  console.warn(
+    process.env.FOULCAST_E2E === "0"
+      ? "[e2e] browser tests turned off (FOULCAST_E2E=0)"
+      : "[e2e] Chromium not found (set CHROMIUM_PATH, or apt-get install chromium): browser tests skipped",
+  );
+}
 const SHOTS = path.join("test-output", "screenshots");
 
 let app: E2eApp;

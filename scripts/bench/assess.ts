@@ -1,7 +1,7 @@
 // Assessment benchmark: assessAsset on (1) one exchanger with five years of hourly data (about 43,800 periods),
 // (2) the 24-asset demo fleet, (3) 500 assessments (the demo inputs in turn), each beside the time of a plain linear
 // least-squares fit of the same data (OLS of Rf on time) as a ratio.
-// Run: node --import tsx scripts/bench/assess.ts
+// Run: node --import tsx scripts/bench/assess.ts [--count 500] [--json (figures as one JSON line on stdout)]
 // Pure computation, no database. Times are medians of repeated runs after a warm-up: wall clock, and the process CPU
 // time (user + system, which includes V8's helper threads), since on a shared machine the wall clock also counts the
 // time other processes hold the cores.
@@ -13,7 +13,10 @@ import { DEMO_END_MS, demoFleet, simulateDemoFleet } from "../../lib/demo";
 import { fiveYearSimulation } from "./assess-sample-data";
 
 const DAY_MS = 86_400_000;
-const log = (message: string) => console.log(message);
+const json = process.argv.includes("--json");
+const countArgument = process.argv.indexOf("--count");
+const COUNT = countArgument > 0 ? Number(process.argv[countArgument + 1]) : 500;
+const log = (message: string) => (json ? console.error(message) : console.log(message));
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);
@@ -127,8 +130,17 @@ const fleetOlsMs = time(() => fleetPlain.forEach((fit) => fit()), 20);
 log(`demo fleet, ${fleetInputs.length} assets (${demoFleet().assets.length} in the fleet), hourly input:`);
 log(`  assessAsset ${describe(fleetMs, 0)} in all, ${(fleetMs.wallMs / fleetInputs.length).toFixed(1)} ms wall per asset; OLS ${describe(fleetOlsMs, 2)}; ratio ${(fleetMs.wallMs / fleetOlsMs.wallMs).toFixed(0)} (wall)`);
 
-// 3. 500 assessments: the demo inputs in turn (actual run), and the five-year figure extrapolated.
-const fiveHundred = Array.from({ length: 500 }, (_, index) => fleetInputs[index % fleetInputs.length] as AssessmentInput);
+// 3. COUNT (500) assessments: the demo inputs in turn (actual run), and the five-year figure extrapolated.
+const fiveHundred = Array.from({ length: COUNT }, (_, index) => fleetInputs[index % fleetInputs.length] as AssessmentInput);
 const fiveHundredMs = time(() => fiveHundred.forEach((input) => assessAsset(input)), 1, 0);
-log(`500 assessments (demo inputs in turn, actual run): ${(fiveHundredMs.wallMs / 1000).toFixed(2)} s wall (${(fiveHundredMs.cpuMs / 1000).toFixed(2)} s CPU)`);
+log(`${COUNT} assessments (demo inputs in turn, actual run): ${(fiveHundredMs.wallMs / 1000).toFixed(2)} s wall (${(fiveHundredMs.cpuMs / 1000).toFixed(2)} s CPU)`);
 log(`500 assets with five years of hourly data (extrapolated from 1.): ${((500 * fiveMs.wallMs) / 1000).toFixed(1)} s wall (${((500 * fiveMs.cpuMs) / 1000).toFixed(1)} s CPU)`);
+if (json) {
+  console.log(
+    JSON.stringify({
+      fiveYears: { periods: fiveInput.periods.length, assess: fiveMs, ols: fiveOlsMs, ratioWall: fiveMs.wallMs / fiveOlsMs.wallMs, ratioCpu: fiveMs.cpuMs / fiveOlsMs.cpuMs },
+      demoFleet: { assets: fleetInputs.length, assess: fleetMs, ols: fleetOlsMs, ratioWall: fleetMs.wallMs / fleetOlsMs.wallMs, ratioCpu: fleetMs.cpuMs / fleetOlsMs.cpuMs },
+      many: { count: COUNT, wallMs: fiveHundredMs.wallMs, cpuMs: fiveHundredMs.cpuMs },
+    }),
+  );
+}

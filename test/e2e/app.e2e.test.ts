@@ -3,6 +3,7 @@
 // to test-output/screenshots.
 import fs from "node:fs";
 import path from "node:path";
+import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 import { chromium, type Browser, type Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PASSWORD, demoUserEmail } from "../../lib/data/seed-demo-users";
@@ -126,6 +127,33 @@ describe.skipIf(!executablePath)("in a real browser", () => {
     const ics = await page.request.get(`${app.baseUrl}${await page.getByRole("link", { name: "iCalendar" }).getAttribute("href")}`);
     expect(ics.headers()["content-type"]).toMatch(/text\/calendar/);
     expect((await ics.text()).match(/BEGIN:VEVENT/g)?.length ?? 0).toBeGreaterThan(0);
+    await page.close();
+  }, 600_000);
+
+  it("gives a manager the monthly condition summary on screen and as a server-made PDF", async () => {
+    const page = await signedIn("viewer");
+    await page.goto(`${app.baseUrl}/reports/monthly?site=BWH&month=2026-11`, { timeout: 180_000 });
+    await expect.poll(() => page.locator("h1").first().innerText(), { timeout: 180_000 }).toMatch(/Monthly condition summary/);
+    expect(await page.locator("main").innerText()).toMatch(/November 2026|2026-11/);
+    await shot(page, "monthly-report");
+    const response = await page.request.get(`${app.baseUrl}/api/reports/monthly.pdf?site=BWH&month=2026-11&paper=a4`, { timeout: 240_000 });
+    expect(response.status()).toBe(200);
+    expect(response.headers()["content-type"]).toBe("application/pdf");
+    const bytes = new Uint8Array(await response.body());
+    // PDF 1.7 (ISO 32000-1) §7.5.2: a file starts with the header %PDF-
+    expect(new TextDecoder().decode(bytes.subarray(0, 5))).toBe("%PDF-");
+    const pdf = await getDocument({ data: bytes, useSystemFonts: true }).promise;
+    expect(pdf.numPages).toBeGreaterThanOrEqual(1);
+    expect(pdf.numPages).toBeLessThanOrEqual(10);
+    let text = "";
+    for (let number = 1; number <= pdf.numPages; number += 1) {
+      const content = await (await pdf.getPage(number)).getTextContent();
+      text += content.items.map((item) => ("str" in item ? item.str : "")).join(" ") + "\n";
+    }
+    expect(text).toContain("Brakwater Haven");
+    for (const tag of ["E-1101", "E-1105", "E-2201"]) expect(text).toContain(tag);
+    expect(text).toMatch(/permit/i); // the advisory caution is printed
+    fs.writeFileSync(path.join("test-output", "monthly-report.pdf"), bytes);
     await page.close();
   }, 600_000);
 });

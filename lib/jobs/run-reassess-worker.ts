@@ -16,11 +16,14 @@ export async function runReassessWorker(url: string, options: ReassessWorkerOpti
   const boss = await openJobQueue(url, { maxConnections: concurrency + 1, maintenance: true });
   const prisma = createPrismaClient(url);
   const workers = await startReassessWorkers(boss, prisma, url, options);
+  let stopping: Promise<void> | null = null;
   return {
-    stop: async (timeoutMs = 60_000) => {
-      await workers.stop(timeoutMs);
-      await boss.stop({ graceful: true, wait: true, timeout: timeoutMs });
-      await prisma.$disconnect();
-    },
+    // Idempotent: a second call (e.g. from a signal handler and the normal end at once) waits for the first.
+    stop: (timeoutMs = 60_000) =>
+      (stopping ??= (async () => {
+        await workers.stop(timeoutMs);
+        await boss.stop({ graceful: true, wait: true, timeout: timeoutMs });
+        await prisma.$disconnect();
+      })()),
   };
 }

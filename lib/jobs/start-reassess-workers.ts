@@ -20,7 +20,7 @@ export interface ReassessWorkerOptions {
 }
 
 export interface ReassessWorkers {
-  /** Stops fetching, waits for the jobs in progress (at most `timeoutMs`), and closes the lock pool. */
+  /** Stops fetching, waits for the jobs in progress (at most `timeoutMs`), and closes the lock pool; idempotent. */
   stop(timeoutMs?: number): Promise<void>;
 }
 
@@ -58,13 +58,15 @@ export async function startReassessWorkers(boss: PgBoss, prisma: PrismaClient, u
   for (let index = 0; index < concurrency; index += 1) {
     ids.push(await boss.work<ReassessJobData>(REASSESS_QUEUE, { batchSize: 1, pollingIntervalSeconds: options.pollingIntervalSeconds ?? 2 }, handler));
   }
+  let stopping: Promise<void> | null = null;
   return {
-    stop: async (timeoutMs = 60_000) => {
-      for (const id of ids) await boss.offWork({ id });
-      // offWork returns at once; wait until no job of ours is in progress.
-      const deadline = Date.now() + timeoutMs;
-      while (inProgress > 0 && Date.now() < deadline) await new Promise((resolve) => setTimeout(resolve, 100));
-      await locks.end();
-    },
+    stop: (timeoutMs = 60_000) =>
+      (stopping ??= (async () => {
+        for (const id of ids) await boss.offWork({ id });
+        // offWork returns at once; wait until no job of ours is in progress.
+        const deadline = Date.now() + timeoutMs;
+        while (inProgress > 0 && Date.now() < deadline) await new Promise((resolve) => setTimeout(resolve, 100));
+        await locks.end();
+      })()),
   };
 }

@@ -2,6 +2,7 @@
 import { prepareDatabase, type PreparedDatabase } from "../../lib/database/prepare-database";
 import { databaseTarget } from "../../lib/database/connection-settings";
 import { disconnectPrisma } from "../../lib/db";
+import { closeSharedJobQueue } from "../../lib/jobs/shared-job-queue";
 
 export const log = (message: string) => console.error(`[foulcast] ${message}`);
 
@@ -15,6 +16,7 @@ export async function withDatabase<T>(work: (database: PreparedDatabase) => Prom
   try {
     return await work(database);
   } finally {
+    await closeSharedJobQueue();
     await disconnectPrisma();
     await database.release();
   }

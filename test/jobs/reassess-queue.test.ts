@@ -103,3 +103,12 @@ describe("reassessment queue", () => {
     expect(await refreshAfterImport(database.prisma, summary, { queue: null })).toEqual({ reassessed: true, queued: false });
   }, 120_000);
 });
+
+describe("startReassessWorkers", () => {
+  it("can be stopped twice (signal handler and normal end) without failing", async () => {
+    const [queue] = queues as [PgBoss];
+    const workers = await startReassessWorkers(queue, database.prisma, database.url, { pollingIntervalSeconds: 0.5 });
+    await expect(Promise.all([workers.stop(), workers.stop()])).resolves.toEqual([undefined, undefined]);
+    await expect(workers.stop()).resolves.toBeUndefined();
+  });
+});

@@ -75,7 +75,7 @@ const handlers: Record<Step, () => Promise<void>> = {
     notes.push(`planner: ${fmt(run.seconds, 0)} s, load average ${run.loadBefore} → ${run.loadAfter}`);
   },
   api: async () => {
-    const run = await runScript("scripts/bench/api-load.ts", ["--assets", "500", "--connections", "20", "--seconds", "10", "--requests", "3000", "--json"]);
+    const run = await runScript("scripts/bench/api-load.ts", ["--build", "--assets", "500", "--connections", "20", "--seconds", "10", "--requests", "3000", "--json"]);
     const result = run.result as ApiResult;
     for (const endpoint of result.endpoints) {
       const target = endpoint.path.startsWith("/api/fleet") || endpoint.path === "/api/assets" ? `; target p95 < 200 ms: ${endpoint.p95Ms < 200 ? "met" : "missed"}` : "";
@@ -167,8 +167,8 @@ ${notes.map((note) => `- ${note}`).join("\n")}
   per-cycle trend models, forecasts), pure computation, against a straight-line least-squares fit of the same daily Rf
   series (lib/core/fit QR): the ratio is what the model costs over the plainest fit.
 - **cleaning plan**: scripts/bench/plan.ts — the seeded 500-exchanger, 52-week instance (docs/planner.md).
-- **GET …**: scripts/bench/api-load.ts — autocannon on loopback against the production build served by
-  \`npm start -- --no-build\` on a 500-exchanger fleet (the 24 demo exchangers and copies of them, 19,704 hourly readings
+- **GET …**: scripts/bench/api-load.ts — autocannon on loopback against a production build of the working tree (made
+  at the start of the step into .next-bench), served by \`npm start -- --no-build\` on a 500-exchanger fleet (the 24 demo exchangers and copies of them, 19,704 hourly readings
   each), signed in as the demo viewer. Latency percentiles are over every answered request; server CPU per request
   is the web server process's CPU time divided by the requests answered.
 - **reassessment jobs**: scripts/bench/workers.ts — every exchanger queued on "reassess-asset", taken by one, then two

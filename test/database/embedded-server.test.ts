@@ -3,26 +3,15 @@
 // and the next start finds the data intact.
 import { execFile } from "node:child_process";
 import fsp from "node:fs/promises";
-import net from "node:net";
 import path from "node:path";
 import { promisify } from "node:util";
 import pg from "pg";
 import { afterAll, describe, expect, it } from "vitest";
 import { embeddedSettings } from "../../lib/database/connection-settings";
 import { ensureEmbeddedServer } from "../../lib/database/embedded-server";
+import { freePort } from "../support/free-port";
 
 const run = promisify(execFile);
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
-    });
-  });
-}
 
 async function query(url: string, sql: string): Promise<pg.QueryResult> {
   const client = new pg.Client({ connectionString: url });

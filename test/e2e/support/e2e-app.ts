@@ -2,12 +2,12 @@
 // accounts, a production build (`next build` into .next-e2e) and `next start` on a free port.
 import { spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
-import net from "node:net";
 import path from "node:path";
 import { refreshFleet } from "../../../lib/data/refresh-fleet";
 import { seedDemoFleetIfEmpty } from "../../../lib/data/seed-demo-fleet";
 import { seedDemoUsersIfNone } from "../../../lib/data/seed-demo-users";
 import { createTestDatabase, type TestDatabase } from "../../support/test-database";
+import { freePort } from "../../support/free-port";
 
 export const E2E_TAGS = ["E-1101", "E-1105", "E-2201"];
 export const DIST_DIR = ".next-e2e";
@@ -17,17 +17,6 @@ export function chromiumPath(): string | null {
   if (process.env.FOULCAST_E2E === "0") return null;
   const candidate = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
   return fs.existsSync(candidate) ? candidate : null;
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.once("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no free port"))));
-    });
-  });
 }
 
 function run(command: string, args: string[], env: NodeJS.ProcessEnv, output: string[]): ChildProcess {

@@ -1,0 +1,13 @@
+// A TCP port on 127.0.0.1 that was free a moment ago (the OS picks it), for servers the tests start.
+import net from "node:net";
+
+export function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer();
+    server.once("error", reject);
+    server.listen(0, "127.0.0.1", () => {
+      const address = server.address();
+      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no free port"))));
+    });
+  });
+}

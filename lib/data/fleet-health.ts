@@ -1,6 +1,7 @@
 // One row per exchanger for the fleet health table, the API and the monthly summary.
 import type { Prisma, PrismaClient } from "../../generated/prisma/client";
 import type { Assessment } from "../core/assessment";
+import { WEEK_MS } from "../core/plan";
 import { assessmentSummary, type AssessmentSummary } from "../planning/assessment-summary";
 import { fleetStatus, type FleetStatus } from "../planning/fleet-status";
 import { isoDate } from "../planning/planning-calendar";
@@ -39,7 +40,7 @@ export async function fleetHealth(prisma: PrismaClient, options: { siteCode?: st
   const [alerts, cleanings, bookings, plans] = await Promise.all([
     prisma.instrumentAlert.groupBy({ by: ["assetId"], where: { assetId: { in: ids }, acknowledgedAt: null }, _count: { _all: true } }),
     prisma.cleaning.groupBy({ by: ["assetId"], where: { assetId: { in: ids } }, _max: { date: true } }),
-    prisma.cleaningBooking.findMany({ where: { assetId: { in: ids }, weekStart: { gte: new Date(nowMs - 7 * 86_400_000) } }, orderBy: { weekStart: "asc" } }),
+    prisma.cleaningBooking.findMany({ where: { assetId: { in: ids }, weekStart: { gte: new Date(nowMs - WEEK_MS) } }, orderBy: { weekStart: "asc" } }),
     prisma.planRun
       .groupBy({ by: ["siteId"], where: { kind: "plan", ...(options.siteCode ? { site: { code: options.siteCode } } : {}) }, _max: { id: true } })
       .then((latest) => prisma.planRun.findMany({ where: { id: { in: latest.map((row) => row._max.id ?? -1) } }, select: { siteId: true, result: true } })),
@@ -51,7 +52,7 @@ export async function fleetHealth(prisma: PrismaClient, options: { siteCode?: st
     const cleaningsOfPlan = (plan.result as unknown as { cleanings: { assetId: string; startMs: number }[] }).cleanings;
     for (const cleaning of cleaningsOfPlan) {
       const id = Number(cleaning.assetId);
-      if (!nextPlanned.has(id) && cleaning.startMs >= nowMs - 7 * 86_400_000) nextPlanned.set(id, isoDate(cleaning.startMs));
+      if (!nextPlanned.has(id) && cleaning.startMs >= nowMs - WEEK_MS) nextPlanned.set(id, isoDate(cleaning.startMs));
     }
   }
   const nextBooked = new Map<number, string>();

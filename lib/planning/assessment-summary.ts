@@ -2,8 +2,8 @@
 import type { Asset, Site } from "../../generated/prisma/client";
 import type { Assessment } from "../core/assessment";
 import { economicsSummary } from "./economics-summary";
+import { DAY_MS } from "../core/plan";
 
-const DAY_MS = 86_400_000;
 /** Days of fouling history in the small trend line, and its most points. */
 const SPARKLINE_DAYS = 365;
 const SPARKLINE_POINTS = 40;

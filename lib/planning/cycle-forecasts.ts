@@ -2,8 +2,8 @@
 import type { Assessment } from "../core/assessment";
 import { sampledDutyLoss, type DutyLossForecast } from "../core/economics";
 import { referenceRating, type ReferenceConditions } from "../core/forecast";
+import { DAY_MS } from "../core/plan";
 
-const DAY_MS = 86_400_000;
 
 /** What the planner needs from an assessment, or why the asset cannot be planned. */
 export type CycleForecasts =

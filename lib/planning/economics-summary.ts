@@ -2,8 +2,8 @@
 import type { Asset, AssetAssessment, Site } from "../../generated/prisma/client";
 import { cleaningEventCost, foulingCostSummary, optimalCleaningInterval, type OptimalCleaningInterval } from "../core/economics";
 import { assetPlanBasis } from "./asset-plan-basis";
+import { DAY_MS } from "../core/plan";
 
-const DAY_MS = 86_400_000;
 
 /** The economics of one asset as the asset page, the fleet table and the API show them (site currency, SI). */
 export interface EconomicsSummary {

@@ -4,7 +4,7 @@ import type { PlanRun } from "../../generated/prisma/client";
 import { planToCsv, planToICalendar, type CleaningPlan } from "../core/plan";
 import { ADVISORY_NOTICE } from "../data/assessment-document";
 import { spreadsheetText } from "../present/spreadsheet-text";
-import { planDocument } from "./plan-document";
+import { planDocument, type PlanDocument } from "./plan-document";
 
 export type PlanExportFormat = "ics" | "csv" | "xlsx";
 export const PLAN_EXPORT_FORMATS: readonly PlanExportFormat[] = ["ics", "csv", "xlsx"];
@@ -22,8 +22,7 @@ const CONTENT_TYPES: Record<PlanExportFormat, string> = {
 };
 
 /** Sheet rows of the plan: one header row, one row per cleaning; user-entered text neutralised (spreadsheetText). */
-function planSheet(run: PlanRun): SheetData {
-  const document = planDocument(run);
+function planSheet(document: PlanDocument): SheetData {
   const header = ["Tag", "Start", "Return to service", "Week", "Outage days", "Method", "State", "Window", "Saving vs no cleaning", "Currency", "P10 crossing", "P10 margin days", "Moved by", "Explanation"];
   const movedBy = new Map(document.assets.map((asset) => [asset.tag, asset.movedBy.join("; ")]));
   const rows: SheetData = [header.map((value) => ({ value, fontWeight: "bold" as const }))];
@@ -59,16 +58,16 @@ function planSheet(run: PlanRun): SheetData {
  */
 export async function exportPlan(run: PlanRun, format: PlanExportFormat, nowMs: number): Promise<PlanExportFile> {
   const plan = run.result as unknown as CleaningPlan;
-  const siteCode = planDocument(run).site.code;
-  const base = `cleaning-plan-${siteCode.toLowerCase().replace(/[^a-z0-9-]/g, "-")}-${run.id}`;
+  const document = planDocument(run);
+  const siteSlug = document.site.code.toLowerCase().replace(/[^a-z0-9-]/g, "-");
+  const base = `cleaning-plan-${siteSlug}-${run.id}`;
   let body: Buffer;
   if (format === "ics") {
-    const currency = planDocument(run).totals.currency;
-    body = Buffer.from(planToICalendar(plan, { dtstampMs: nowMs, uidDomain: `${siteCode.toLowerCase().replace(/[^a-z0-9-]/g, "-")}.foulcast.invalid`, currency, caution: ADVISORY_NOTICE }), "utf8");
+    body = Buffer.from(planToICalendar(plan, { dtstampMs: nowMs, uidDomain: `${siteSlug}.foulcast.invalid`, currency: document.totals.currency, caution: ADVISORY_NOTICE }), "utf8");
   } else if (format === "csv") {
     body = Buffer.from(planToCsv(plan), "utf8");
   } else {
-    body = await writeXlsxFile(planSheet(run), { sheet: "Cleaning plan", stickyRowsCount: 1 }).toBuffer();
+    body = await writeXlsxFile(planSheet(document), { sheet: "Cleaning plan", stickyRowsCount: 1 }).toBuffer();
   }
   return { fileName: `${base}.${format}`, contentType: CONTENT_TYPES[format], body };
 }

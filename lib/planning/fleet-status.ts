@@ -1,4 +1,5 @@
 // The condition category of an exchanger in the fleet table: how soon it needs cleaning, from its threshold forecast.
+import { DAY_MS } from "../core/plan";
 import type { AssessmentSummary } from "./assessment-summary";
 
 export const FLEET_STATUSES = ["act-now", "plan-cleaning", "watch", "good", "no-estimate"] as const;
@@ -37,7 +38,7 @@ export function fleetStatus(summary: AssessmentSummary | null, nowMs: number): F
   if (threshold.status === "no-trend") return "no-estimate";
   const p10 = threshold.p10 ? Date.parse(threshold.p10) : null;
   if (p10 === null) return "good";
-  const days = (p10 - nowMs) / 86_400_000;
+  const days = (p10 - nowMs) / DAY_MS;
   if (days <= ACT_NOW_DAYS) return "act-now";
   if (days <= PLAN_DAYS) return "plan-cleaning";
   if (days <= WATCH_DAYS) return "watch";

@@ -1,7 +1,7 @@
 // Reads a site's register, assessments, calendar and bookings into the planner's input (lib/core/plan).
-import type { PrismaClient } from "../../generated/prisma/client";
+import type { PlanSettings, PrismaClient } from "../../generated/prisma/client";
 import { optimalCleaningInterval } from "../core/economics";
-import { MAXIMUM_HORIZON_WEEKS, type ExclusionGroup, type PlanAsset, type PlanInput, type PlanOptions, type TurnaroundWindow } from "../core/plan";
+import { MAXIMUM_HORIZON_WEEKS, weekOfInstant, type ExclusionGroup, type PlanAsset, type PlanInput, type PlanOptions, type TurnaroundWindow } from "../core/plan";
 import { assetPlanBasis } from "./asset-plan-basis";
 import { isoDate, planningStartDate, weeksOfDateRange } from "./planning-calendar";
 
@@ -17,6 +17,15 @@ export const DEFAULT_PLAN_SETTINGS = {
 /** Most cleanings of one asset the planner considers in a horizon. */
 const MAXIMUM_CLEANINGS_PER_ASSET = 3;
 
+export type PlanSettingsValues = { crewCapacity: number; horizonWeeks: number; deadlineQuantile: "p10" | "p50" | "p90"; minimumDaysBetweenCleanings: number; timeLimitSeconds: number };
+
+/** A site's stored planning settings, or the defaults for a site that has none. */
+export function resolvePlanSettings(stored: Pick<PlanSettings, "crewCapacity" | "horizonWeeks" | "deadlineQuantile" | "minimumDaysBetweenCleanings" | "timeLimitSeconds"> | null): PlanSettingsValues {
+  if (!stored) return { ...DEFAULT_PLAN_SETTINGS };
+  const { crewCapacity, horizonWeeks, minimumDaysBetweenCleanings, timeLimitSeconds } = stored;
+  return { crewCapacity, horizonWeeks, deadlineQuantile: stored.deadlineQuantile as PlanSettingsValues["deadlineQuantile"], minimumDaysBetweenCleanings, timeLimitSeconds };
+}
+
 export class PlanningError extends Error {
   constructor(message: string) {
     super(message);
@@ -26,7 +35,7 @@ export class PlanningError extends Error {
 
 export interface LoadedPlanInput {
   site: { id: number; code: string; name: string; timeZone: string; currency: string };
-  settings: { crewCapacity: number; horizonWeeks: number; deadlineQuantile: "p10" | "p50" | "p90"; minimumDaysBetweenCleanings: number; timeLimitSeconds: number };
+  settings: PlanSettingsValues;
   input: PlanInput;
   options: PlanOptions;
   /** Assets of the site that could not be planned, and why. */
@@ -51,13 +60,11 @@ export interface LoadedPlanInput {
 export async function loadPlanInput(prisma: PrismaClient, siteCode: string, options: { nowMs: number; horizonWeeks?: number; crewCapacity?: number }): Promise<LoadedPlanInput> {
   const site = await prisma.site.findUnique({ where: { code: siteCode }, include: { planSettings: true } });
   if (!site) throw new PlanningError(`unknown site "${siteCode}"`);
-  const stored = site.planSettings;
-  const settings = {
-    crewCapacity: options.crewCapacity ?? stored?.crewCapacity ?? DEFAULT_PLAN_SETTINGS.crewCapacity,
-    horizonWeeks: options.horizonWeeks ?? stored?.horizonWeeks ?? DEFAULT_PLAN_SETTINGS.horizonWeeks,
-    deadlineQuantile: ((stored?.deadlineQuantile ?? "p10") as "p10" | "p50" | "p90"),
-    minimumDaysBetweenCleanings: stored?.minimumDaysBetweenCleanings ?? DEFAULT_PLAN_SETTINGS.minimumDaysBetweenCleanings,
-    timeLimitSeconds: stored?.timeLimitSeconds ?? DEFAULT_PLAN_SETTINGS.timeLimitSeconds,
+  const resolved = resolvePlanSettings(site.planSettings);
+  const settings: PlanSettingsValues = {
+    ...resolved,
+    crewCapacity: options.crewCapacity ?? resolved.crewCapacity,
+    horizonWeeks: options.horizonWeeks ?? resolved.horizonWeeks,
   };
   if (!Number.isInteger(settings.horizonWeeks) || settings.horizonWeeks < 1 || settings.horizonWeeks > MAXIMUM_HORIZON_WEEKS) {
     throw new PlanningError(`horizon must be 1 to ${MAXIMUM_HORIZON_WEEKS} whole weeks, got ${settings.horizonWeeks}`);
@@ -100,7 +107,7 @@ export async function loadPlanInput(prisma: PrismaClient, siteCode: string, opti
     const cycleDays = Math.max(optimum.intervalDays, settings.minimumDaysBetweenCleanings) + basis.economics.method.outageDays;
     const maximumCleanings = Math.min(MAXIMUM_CLEANINGS_PER_ASSET, Math.max(1, Math.ceil(horizonDays / cycleDays)));
     const lockedWeeks = asset.bookings
-      .map((booking) => Math.floor((booking.weekStart.getTime() - startMs) / (7 * 86_400_000)))
+      .map((booking) => weekOfInstant(startMs, booking.weekStart.getTime()))
       .filter((week) => week >= 0 && week < weeks)
       .slice(0, maximumCleanings);
     planAssets.push({

@@ -1,6 +1,6 @@
 // Calendar arithmetic of the planner: site dates <-> planning weeks.
 import { TZDate } from "@date-fns/tz";
-import { DAY_MS, WEEK_MS } from "../core/plan";
+import { DAY_MS, WEEK_MS, weekOfInstant } from "../core/plan";
 
 /**
  * planningStartDate: the first Monday on or after the instant's calendar date in the site's time zone, as 00:00 UTC
@@ -16,7 +16,7 @@ export function planningStartDate(instantMs: number, timeZone: string): number {
 
 /** The Monday (00:00 UTC of the date) of the planning week that contains a calendar date. */
 export function weekStartOfDate(horizonStartMs: number, dateMs: number): number {
-  return horizonStartMs + Math.floor((dateMs - horizonStartMs) / WEEK_MS) * WEEK_MS;
+  return horizonStartMs + weekOfInstant(horizonStartMs, dateMs) * WEEK_MS;
 }
 
 /**
@@ -24,8 +24,8 @@ export function weekStartOfDate(horizonStartMs: number, dateMs: number): number 
  * range lies outside the horizon.
  */
 export function weeksOfDateRange(horizonStartMs: number, weeks: number, firstDateMs: number, lastDateMs: number): number[] {
-  const first = Math.max(0, Math.floor((firstDateMs - horizonStartMs) / WEEK_MS));
-  const last = Math.min(weeks - 1, Math.floor((lastDateMs - horizonStartMs) / WEEK_MS));
+  const first = Math.max(0, weekOfInstant(horizonStartMs, firstDateMs));
+  const last = Math.min(weeks - 1, weekOfInstant(horizonStartMs, lastDateMs));
   const result: number[] = [];
   for (let week = first; week <= last; week += 1) result.push(week);
   return result;

@@ -3,7 +3,7 @@ import { z } from "zod";
 import type { PrismaClient } from "../../generated/prisma/client";
 import { MAXIMUM_HORIZON_WEEKS } from "../core/plan";
 import { recordAudit, type Actor } from "../data/record-audit";
-import { DEFAULT_PLAN_SETTINGS, PlanningError } from "./load-plan-input";
+import { PlanningError, resolvePlanSettings } from "./load-plan-input";
 import { isoDate, parseIsoDate } from "./planning-calendar";
 
 export const planSettingsSchema = z
@@ -43,8 +43,7 @@ function firstIssue(error: z.ZodError): string {
 /** The site's planning settings (stored values over the defaults). */
 export async function getPlanSettings(prisma: PrismaClient, siteCode: string) {
   const id = await siteId(prisma, siteCode);
-  const stored = await prisma.planSettings.findUnique({ where: { siteId: id } });
-  return { ...DEFAULT_PLAN_SETTINGS, ...(stored ? { crewCapacity: stored.crewCapacity, horizonWeeks: stored.horizonWeeks, deadlineQuantile: stored.deadlineQuantile as "p10" | "p50" | "p90", minimumDaysBetweenCleanings: stored.minimumDaysBetweenCleanings, timeLimitSeconds: stored.timeLimitSeconds } : {}) };
+  return resolvePlanSettings(await prisma.planSettings.findUnique({ where: { siteId: id } }));
 }
 
 /** updatePlanSettings: validates and stores changed planning settings. */

@@ -1,13 +1,20 @@
-// Records a cleaning of an asset and recomputes its assessment (a cleaning starts a new fouling cycle).
+// Records a cleaning of an asset and recomputes its assessment (a cleaning starts a new fouling cycle): inline, or as a
+// job on the reassessment queue when this process has one (refreshAsset decides, as for imports).
 import type { PrismaClient } from "../../generated/prisma/client";
 import { recordAudit } from "./record-audit";
-import { refreshAssessment } from "./refresh-assessment";
+import { refreshAsset, type AssetRefresh, type RefreshAssetOptions } from "./refresh-asset";
 import { cleaningSchema, type CleaningInput } from "../validation/cleaning";
 
 export class CleaningRecordError extends Error {}
 
-/** `userId`: the signed-in user, null for the CLI. The cleaning and its audit event are written together. */
-export async function recordCleaning(prisma: PrismaClient, input: CleaningInput, createdBy: string, userId: string | null = null): Promise<{ id: number; reassessed: boolean }> {
+export type RecordCleaningOptions = Pick<RefreshAssetOptions, "queue">;
+
+/**
+ * `userId`: the signed-in user, null for the CLI. The cleaning and its audit event are written together. Then the
+ * assessment: `reassessed` when recomputed inline (and the asset has usable data), `queued` when a reassessment job
+ * for the asset is waiting (`queue`: default the process's shared queue, null: inline).
+ */
+export async function recordCleaning(prisma: PrismaClient, input: CleaningInput, createdBy: string, userId: string | null = null, options: RecordCleaningOptions = {}): Promise<{ id: number } & AssetRefresh> {
   const parsed = cleaningSchema.safeParse(input);
   if (!parsed.success) throw new CleaningRecordError(parsed.error.issues.map((issue) => `${issue.path.join(".") || "cleaning"}: ${issue.message}`).join("; "));
   const cleaning = parsed.data;
@@ -41,6 +48,6 @@ export async function recordCleaning(prisma: PrismaClient, input: CleaningInput,
     });
     return row;
   });
-  const reassessed = (await refreshAssessment(prisma, cleaning.tag)) !== null;
-  return { id: created.id, reassessed };
+  const { reassessed, queued } = await refreshAsset(prisma, cleaning.tag, { queue: options.queue, inline: "assessment" });
+  return { id: created.id, reassessed, queued };
 }

@@ -1,9 +1,10 @@
 // The reassessment queue on a real database: singleton keys, exactly-once processing by workers of two separate
-// queue instances (as two processes would have), and imports that enqueue their asset.
+// queue instances (as two processes would have), and imports and cleaning records that enqueue their asset.
 import type PgBoss from "pg-boss";
 import pg from "pg";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { importReadings } from "../../lib/data/import-readings";
+import { recordCleaning } from "../../lib/data/record-cleaning";
 import { refreshAfterImport } from "../../lib/data/refresh-after-import";
 import { seedDemoFleetIfEmpty } from "../../lib/data/seed-demo-fleet";
 import { DEMO_END_MS } from "../../lib/demo/demo-constants";
@@ -28,6 +29,16 @@ async function jobRows(url: string): Promise<{ singleton_key: string; state: str
   } finally {
     await client.end();
   }
+}
+
+/** Three hourly rows of plausible readings from `startMs`, with the canonical header. */
+function readingsCsv(startMs: number): string {
+  return `${CANONICAL_HEADER}\n${[0, 1, 2].map((hour) => `${new Date(startMs + hour * 3_600_000).toISOString()},180,120,25,75,12,15`).join("\n")}\n`;
+}
+
+/** The jobs of one asset that wait for a worker. */
+async function waitingJobs(url: string, assetId: number): Promise<{ singleton_key: string; state: string }[]> {
+  return (await jobRows(url)).filter((row) => row.state === "created" && row.singleton_key === reassessSingletonKey(assetId));
 }
 
 async function waitFor(condition: () => Promise<boolean>, timeoutMs: number): Promise<void> {
@@ -83,10 +94,8 @@ describe("reassessment queue", () => {
     const [queue] = queues as [PgBoss];
     const asset = assets[0] as { id: number; tag: string };
     const before = await database.prisma.assetAssessment.findUniqueOrThrow({ where: { assetId: asset.id } });
-    const csv = (startMs: number) =>
-      `${CANONICAL_HEADER}\n${[0, 1, 2].map((hour) => `${new Date(startMs + hour * 3_600_000).toISOString()},180,120,25,75,12,15`).join("\n")}\n`;
     const importOnce = async (startMs: number) => {
-      const summary = await importReadings(database.prisma, { assetTag: asset.tag, source: "cli", createdBy: "test", fileName: "new.csv", stream: textStream(csv(startMs)) });
+      const summary = await importReadings(database.prisma, { assetTag: asset.tag, source: "cli", createdBy: "test", fileName: "new.csv", stream: textStream(readingsCsv(startMs)) });
       expect(summary.rowsNew).toBe(3);
       return refreshAfterImport(database.prisma, summary, { queue });
     };
@@ -99,8 +108,38 @@ describe("reassessment queue", () => {
     const after = await database.prisma.assetAssessment.findUniqueOrThrow({ where: { assetId: asset.id } });
     expect(after.computedAt).toEqual(before.computedAt);
     // without a queue the same call reassesses inline
-    const summary = await importReadings(database.prisma, { assetTag: asset.tag, source: "cli", createdBy: "test", fileName: "more.csv", stream: textStream(csv(DEMO_END_MS + 8 * 3_600_000)) });
+    const summary = await importReadings(database.prisma, { assetTag: asset.tag, source: "cli", createdBy: "test", fileName: "more.csv", stream: textStream(readingsCsv(DEMO_END_MS + 8 * 3_600_000)) });
     expect(await refreshAfterImport(database.prisma, summary, { queue: null })).toEqual({ reassessed: true, queued: false });
+  }, 120_000);
+
+  it("makes a cleaning record enqueue its asset once, shared with imports, and reassess inline without a queue", async () => {
+    const [queue] = queues as [PgBoss];
+    // E-3102: its job from the first test has completed, so nothing of it waits
+    const asset = assets[1] as { id: number; tag: string };
+    expect(await waitingJobs(database.url, asset.id)).toEqual([]);
+    const before = await database.prisma.assetAssessment.findUniqueOrThrow({ where: { assetId: asset.id } });
+
+    const first = await recordCleaning(database.prisma, { tag: asset.tag, date: "2026-11-02", endDate: "2026-11-04", method: "hydroblast" }, "test", null, { queue });
+    expect(first).toEqual({ id: expect.any(Number), reassessed: false, queued: true });
+    expect(await database.prisma.cleaning.count({ where: { id: first.id, assetId: asset.id } })).toBe(1);
+    expect(await waitingJobs(database.url, asset.id)).toEqual([{ singleton_key: reassessSingletonKey(asset.id), state: "created" }]);
+
+    // a second cleaning and an import of the same asset while its job waits: the same job, no second one
+    const second = await recordCleaning(database.prisma, { tag: asset.tag, date: "2026-11-16", method: "chemical clean" }, "test", null, { queue });
+    expect(second).toEqual({ id: expect.any(Number), reassessed: false, queued: true });
+    const summary = await importReadings(database.prisma, { assetTag: asset.tag, source: "cli", createdBy: "test", fileName: "after-cleaning.csv", stream: textStream(readingsCsv(DEMO_END_MS + 3_600_000)) });
+    expect(summary.rowsNew).toBe(3);
+    expect(await refreshAfterImport(database.prisma, summary, { queue })).toEqual({ reassessed: false, queued: true });
+    expect(await waitingJobs(database.url, asset.id)).toHaveLength(1);
+    // nothing was recomputed inline
+    expect((await database.prisma.assetAssessment.findUniqueOrThrow({ where: { assetId: asset.id } })).computedAt).toEqual(before.computedAt);
+
+    // without a queue the cleaning's assessment is recomputed inline, and no job is added
+    const inline = await recordCleaning(database.prisma, { tag: asset.tag, date: "2026-11-24", method: "hydroblast" }, "test", null, { queue: null });
+    expect(inline).toEqual({ id: expect.any(Number), reassessed: true, queued: false });
+    const after = await database.prisma.assetAssessment.findUniqueOrThrow({ where: { assetId: asset.id } });
+    expect(after.computedAt.getTime()).toBeGreaterThan(before.computedAt.getTime());
+    expect(await waitingJobs(database.url, asset.id)).toHaveLength(1);
   }, 120_000);
 });
 

@@ -82,7 +82,7 @@ export default async function AssetPage({ params, searchParams }: { params: Prom
     <>
       <p className="subtle"><Link href="/">Fleet</Link> / {asset.unit.name}</p>
       <h1>{asset.tag} — {asset.name}</h1>
-      {saved ? <p className="notice" role="status">Changes saved.</p> : null}
+      {saved ? <p className="notice" role="status">{saved === "queued" ? "Changes saved; the reassessment is queued and shows here once a worker has run it." : "Changes saved."}</p> : null}
       {error ? <p className="form-errors" role="alert">Not saved: {error}</p> : null}
       <p className="actions">
         {can(user.role, "assets.edit") ? <Link href={`/assets/${encodeURIComponent(asset.tag)}/edit`}>Edit register entry</Link> : null}

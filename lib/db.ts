@@ -1,10 +1,11 @@
 // The single Prisma client of a process (Prisma with the pg driver adapter,
-// for the embedded server and an external PostgreSQL alike).
+// for the embedded server and an external PostgreSQL alike), and its pg pool.
 import { PrismaPg } from "@prisma/adapter-pg";
+import pg from "pg";
 import { PrismaClient } from "../generated/prisma/client";
 import { databaseTarget } from "./database/connection-settings";
 
-const globalForPrisma = globalThis as unknown as { foulcastPrisma?: PrismaClient };
+const globalForPrisma = globalThis as unknown as { foulcastPrisma?: PrismaClient; foulcastPool?: pg.Pool };
 
 type AdapterTransaction = Awaited<ReturnType<Awaited<ReturnType<PrismaPg["connect"]>>["startTransaction"]>>;
 
@@ -51,22 +52,46 @@ class RecoveringPrismaPg extends PrismaPg {
 }
 
 /**
- * A Prisma client on its own pool of at most 10 connections. An idle connection that the server closes is dropped
- * by the adapter's pool error handler (no crash); a query in flight when the connection is lost fails with the
- * server's or the driver's message, and the next query opens a new connection.
+ * A pool of at most 10 connections. An idle connection that the server closes is dropped (no crash, also before
+ * Prisma first connects); a query in flight when the connection is lost fails with the server's or the driver's
+ * message, and the next query opens a new connection.
  */
-export function createPrismaClient(url: string): PrismaClient {
-  return new PrismaClient({ adapter: new RecoveringPrismaPg({ connectionString: url, max: 10 }) });
+function createPool(url: string): pg.Pool {
+  const pool = new pg.Pool({ connectionString: url, max: 10 });
+  pool.on("error", () => undefined);
+  return pool;
+}
+
+/** A Prisma client on its own pool (see createPool), which $disconnect ends. */
+export function createPrismaClient(url: string, pool: pg.Pool = createPool(url)): PrismaClient {
+  return new PrismaClient({ adapter: new RecoveringPrismaPg(pool, { disposeExternalPool: true }) });
 }
 
 /** The process-wide client; DATABASE_URL or the embedded server's URL. */
 export function getPrisma(): PrismaClient {
-  globalForPrisma.foulcastPrisma ??= createPrismaClient(databaseTarget().url);
+  if (!globalForPrisma.foulcastPrisma) {
+    const pool = createPool(databaseTarget().url);
+    globalForPrisma.foulcastPrisma = createPrismaClient(databaseTarget().url, pool);
+    globalForPrisma.foulcastPool = pool;
+  }
   return globalForPrisma.foulcastPrisma;
+}
+
+/**
+ * The pool under the process-wide client, for the few hot reads where Prisma's own cost per query matters (the
+ * session check on every request: about 1 ms of CPU through $queryRaw, docs/benchmarks.md). Parameterised SQL only.
+ */
+export function getDatabasePool(): pg.Pool {
+  getPrisma();
+  return globalForPrisma.foulcastPool as pg.Pool;
 }
 
 export async function disconnectPrisma(): Promise<void> {
   const client = globalForPrisma.foulcastPrisma;
+  const pool = globalForPrisma.foulcastPool;
   globalForPrisma.foulcastPrisma = undefined;
+  globalForPrisma.foulcastPool = undefined;
   if (client) await client.$disconnect();
+  // $disconnect ends the pool only if Prisma had connected.
+  if (pool && !pool.ending && !pool.ended) await pool.end();
 }

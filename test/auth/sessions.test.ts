@@ -2,9 +2,9 @@ import { verifyPassword } from "better-auth/crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as listAssetsRoute } from "../../app/api/assets/route";
 import { getAuth } from "../../lib/auth/auth";
-import { SESSION_EXPIRES_IN_SECONDS } from "../../lib/auth/auth-settings";
+import { SESSION_EXPIRES_IN_SECONDS, SESSION_UPDATE_AGE_SECONDS } from "../../lib/auth/auth-settings";
 import { AccessDenied, requireRole } from "../../lib/auth/require-role";
-import { sessionUser } from "../../lib/auth/session-user";
+import { sessionUser, verifiedSessionToken } from "../../lib/auth/session-user";
 import { changeUserRole } from "../../lib/data/change-user-role";
 import { createUser, UserAccountError } from "../../lib/data/create-user";
 import { disconnectPrisma } from "../../lib/db";
@@ -88,6 +88,19 @@ describe("sessions", () => {
     await expect(requireRole("read", apiRequest(user.cookie))).rejects.toMatchObject({ status: 401 });
   });
 
+  it("are extended once an hour of their life has passed, and not written to before", async () => {
+    const user = await createSignedInUser(database.prisma, "viewer");
+    const fresh = await database.prisma.session.findFirstOrThrow({ where: { userId: user.id } });
+    expect(await sessionUser(headersWith(user.cookie))).toMatchObject({ id: user.id });
+    expect((await database.prisma.session.findFirstOrThrow({ where: { id: fresh.id } })).expiresAt).toEqual(fresh.expiresAt);
+    // made 61 minutes ago: past SESSION_UPDATE_AGE_SECONDS (1 h), so the check slides expiresAt to now + 8 h
+    const made = Date.now() - (SESSION_UPDATE_AGE_SECONDS + 60) * 1000;
+    await database.prisma.session.update({ where: { id: fresh.id }, data: { expiresAt: new Date(made + SESSION_EXPIRES_IN_SECONDS * 1000) } });
+    expect(await sessionUser(headersWith(user.cookie))).toMatchObject({ id: user.id, role: "viewer" });
+    const slid = await database.prisma.session.findFirstOrThrow({ where: { id: fresh.id } });
+    expect(Math.abs(slid.expiresAt.getTime() - (Date.now() + SESSION_EXPIRES_IN_SECONDS * 1000))).toBeLessThan(60_000);
+  });
+
   it("end at sign-out: the token no longer works", async () => {
     const user = await createSignedInUser(database.prisma, "viewer");
     await getAuth().api.signOut({ headers: headersWith(user.cookie) });
@@ -103,6 +116,29 @@ describe("sessions", () => {
     const refused = await requireRole("data.import", request()).catch((error: unknown) => error);
     expect(refused).toBeInstanceOf(AccessDenied);
     expect(refused).toMatchObject({ status: 403, message: "your role (viewer) does not allow data.import; it needs one of: engineer, admin" });
+  });
+});
+
+describe("verifiedSessionToken", () => {
+  // RFC 4231 test case 2: HMAC-SHA-256 with key "Jefe" of "what do ya want for nothing?" is
+  // 5bdcc146bf60754e6a042426089575c75a003f089d2739839dec58b964ec3843 (hex).
+  const rfc4231Signature = Buffer.from("5bdcc146bf60754e6a042426089575c75a003f089d2739839dec58b964ec3843", "hex").toString("base64");
+
+  it("accepts token.base64(HMAC-SHA-256(secret, token)) and nothing else", () => {
+    expect(rfc4231Signature).toHaveLength(44);
+    expect(verifiedSessionToken(`what do ya want for nothing?.${rfc4231Signature}`, "Jefe")).toBe("what do ya want for nothing?");
+    expect(verifiedSessionToken(`what do ya want for nothing?.${rfc4231Signature}`, "jefe")).toBeNull();
+    expect(verifiedSessionToken(`what do ya want for nothing!.${rfc4231Signature}`, "Jefe")).toBeNull();
+    expect(verifiedSessionToken(`what do ya want for nothing?.${rfc4231Signature.slice(0, 43)}`, "Jefe")).toBeNull();
+    expect(verifiedSessionToken(rfc4231Signature, "Jefe")).toBeNull();
+    expect(verifiedSessionToken(undefined, "Jefe")).toBeNull();
+  });
+
+  it("accepts the cookie better-auth signs at sign-in", async () => {
+    const value = decodeURIComponent(/session_token=([^;]+)/.exec(engineer.cookie)?.[1] ?? "");
+    const token = verifiedSessionToken(value, (await getAuth().$context).secret);
+    expect(token).not.toBeNull();
+    expect(await database.prisma.session.count({ where: { token: token ?? "", userId: engineer.id } })).toBe(1);
   });
 });
 

@@ -5,6 +5,7 @@
 // Run: node --import tsx scripts/bench/api-load.ts [--assets 500] [--connections 20] [--seconds 10] [--requests 3000]
 //      [--url http://127.0.0.1:3000 (use a running server; its own database)] [--port 3311] [--build] [--json]
 //      [--paths /api/health,/api/fleet (instead of the three above)] [--server-pid PID (with --url: for CPU per request)]
+//      [--gzip (send Accept-Encoding: gzip, as browsers and most HTTP clients do; autocannon does not inflate)]
 // Database: foulcast_bench_<assets> on DATABASE_URL's server, else on the local PostgreSQL at 127.0.0.1:5432; made,
 // filled (demo fleet, then copies: scripts/bench/bench-fleet.ts, a few minutes the first time) and kept for reruns.
 import autocannon from "autocannon";
@@ -96,7 +97,8 @@ async function load(base: string, path: string, cookie: string, connections: num
   const latencies: number[] = [];
   const cpuBefore = cpuSeconds(serverPid);
   // autocannon's `amount` would override `duration`; stop at whichever bound comes first instead.
-  const instance = autocannon({ url: `${base}${path}`, connections, duration: seconds, timeout: 30, headers: { cookie } });
+  const headers: Record<string, string> = { cookie, ...(process.argv.includes("--gzip") ? { "accept-encoding": "gzip" } : {}) };
+  const instance = autocannon({ url: `${base}${path}`, connections, duration: seconds, timeout: 30, headers });
   instance.on("response", (_client, _status, _bytes, responseTimeMs) => {
     latencies.push(responseTimeMs);
     if (latencies.length === requests) instance.stop();

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { Prisma } from "../../generated/prisma/client";
 import { refreshAssessment } from "../../lib/data/refresh-assessment";
 import { refreshDataQuality } from "../../lib/data/refresh-data-quality";
 import { seedDemoFleetIfEmpty } from "../../lib/data/seed-demo-fleet";
@@ -185,8 +186,22 @@ describe("plan runs on stored data", () => {
       expect(row.summary?.sparkline.length ?? 0).toBeGreaterThan(5);
       expect(row.summary?.sparkline.length ?? 99).toBeLessThanOrEqual(41);
     }
+    // one site's rows only, in the same order
+    expect((await fleetHealth(database.prisma, { siteCode: "BWH", nowMs: NOW })).map((row) => row.tag)).toEqual(rows.map((row) => row.tag));
+    expect(await fleetHealth(database.prisma, { siteCode: "NOPE", nowMs: NOW })).toEqual([]);
     // E-1103's proposals were booked above
     expect(rows.find((row) => row.tag === "E-1103")?.nextCleaning?.booked).toBe(true);
+    // an assessment stored without its summary (from before summaries existed) gets one computed and stored
+    const e1102 = await assetWithSite("E-1102");
+    const storedSummary = e1102.assessment?.summary as { foulingM2KPerW: number; economics: { costPerDay: number } } | undefined;
+    await database.prisma.assetAssessment.update({ where: { assetId: e1102.id }, data: { summary: Prisma.DbNull } });
+    expect((await assetWithSite("E-1102")).assessment?.summary).toBeNull();
+    const backfilled = (await fleetHealth(database.prisma, { nowMs: NOW })).find((row) => row.tag === "E-1102");
+    expect(backfilled?.summary?.foulingM2KPerW).toBe(storedSummary?.foulingM2KPerW);
+    // equal to the last digit or so: the stored copy went through PostgreSQL jsonb
+    expect(backfilled?.summary?.economics?.costPerDay).toBeCloseTo(storedSummary?.economics.costPerDay ?? Number.NaN, 6);
+    const restored = (await assetWithSite("E-1102")).assessment?.summary as typeof storedSummary;
+    expect(restored?.economics.costPerDay).toBeCloseTo(storedSummary?.economics.costPerDay ?? Number.NaN, 6);
     // the stored summary holds the same cost per day as a fresh economics summary
     const asset = await assetWithSite("E-1101");
     const fresh = economicsSummary(asset, asset.unit.site, asset.assessment);

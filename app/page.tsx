@@ -8,7 +8,25 @@ import { fleetHealth, type FleetHealthRow } from "@/lib/data/fleet-health";
 import { getPrisma } from "@/lib/db";
 import { FLEET_STATUSES, FLEET_STATUS_LABELS, FLEET_STATUS_MEANINGS } from "@/lib/planning/fleet-status";
 import { displayUnit, formatDisplayNumber, formatQuantity, type UnitSystem } from "@/lib/present/display-units";
-import { applyFleetQuery, DEFAULT_FLEET_QUERY, fleetQueryString, fleetTotals, parseFleetQuery, sortLink, type FleetQuery, type FleetSortKey } from "@/lib/present/fleet-query";
+import {
+  applyFleetQuery,
+  DEFAULT_FLEET_PAGE,
+  DEFAULT_FLEET_QUERY,
+  FLEET_PAGE_SIZES,
+  fleetFilterLink,
+  fleetPageHref,
+  fleetTotals,
+  pagerItems,
+  pageSizeLink,
+  parseFleetPage,
+  parseFleetQuery,
+  sliceFleetPage,
+  sortLink,
+  type FleetPageSize,
+  type FleetPageSlice,
+  type FleetQuery,
+  type FleetSortKey,
+} from "@/lib/present/fleet-query";
 import { formatDate, formatMoney, formatSignificant } from "@/lib/present/format";
 
 export const dynamic = "force-dynamic";
@@ -61,12 +79,12 @@ const COLUMNS: { key: FleetSortKey; label: string; numeric?: boolean }[] = [
   { key: "nextCleaning", label: "Next cleaning" },
 ];
 
-function SortHeader({ column, query, unit }: { column: (typeof COLUMNS)[number]; query: FleetQuery; unit?: string }) {
+function SortHeader({ column, query, per, unit }: { column: (typeof COLUMNS)[number]; query: FleetQuery; per: FleetPageSize; unit?: string }) {
   const active = query.sort === column.key;
   const arrow = active ? (query.dir === "asc" ? "▲" : "▼") : "";
   return (
     <th scope="col" className={column.numeric ? "num" : undefined} aria-sort={active ? (query.dir === "asc" ? "ascending" : "descending") : "none"}>
-      <Link href={sortLink(query, column.key)} className="sort-link">
+      <Link href={sortLink(query, column.key, per)} className="sort-link">
         {column.label}
         {unit ? <span className="unit"> ({unit})</span> : null}
         {arrow ? <span aria-hidden="true"> {arrow}</span> : null}
@@ -75,9 +93,51 @@ function SortHeader({ column, query, unit }: { column: (typeof COLUMNS)[number];
   );
 }
 
+/** The smallest page size: with no more rows than this every choice shows the same, so none is offered. */
+const SMALLEST_PAGE_SIZE = Math.min(...FLEET_PAGE_SIZES.filter((size): size is Exclude<FleetPageSize, "all"> => size !== "all"));
+
+/** Below the table: previous/next and page numbers when there are pages, the page size when more than 50 rows match; else nothing. */
+function FleetPager({ query, slice }: { query: FleetQuery; slice: FleetPageSlice<FleetHealthRow> }) {
+  const { page, pageCount, per } = slice;
+  const offerSizes = slice.total > SMALLEST_PAGE_SIZE;
+  if (pageCount === 1 && !offerSizes) return null;
+  const href = (target: number) => fleetPageHref(query, { page: target, per });
+  return (
+    <nav className="pager fleet-pager" aria-label="Pages of the fleet table">
+      {pageCount > 1 ? (
+        <ul className="pager-pages">
+          <li>{page > 1 ? <Link href={href(page - 1)} rel="prev">← Previous</Link> : <span className="pager-off" aria-disabled="true">← Previous</span>}</li>
+          {pagerItems(page, pageCount).map((item, index) =>
+            item === "gap" ? (
+              <li key={`gap-${index}`} className="pager-gap" aria-hidden="true">…</li>
+            ) : (
+              <li key={item}>
+                <Link href={href(item)} aria-label={`Page ${item}`} aria-current={item === page ? "page" : undefined}>{item}</Link>
+              </li>
+            ),
+          )}
+          <li>{page < pageCount ? <Link href={href(page + 1)} rel="next">Next →</Link> : <span className="pager-off" aria-disabled="true">Next →</span>}</li>
+        </ul>
+      ) : null}
+      {offerSizes ? (
+        <p className="pager-sizes">
+          <span id="fleet-page-size">Rows per page</span>
+          <span role="group" aria-labelledby="fleet-page-size">
+            {FLEET_PAGE_SIZES.map((size) => (
+              <Link key={size} href={pageSizeLink(query, slice.firstRow, size)} aria-current={size === per ? "true" : undefined}>{size}</Link>
+            ))}
+          </span>
+        </p>
+      ) : null}
+    </nav>
+  );
+}
+
 export default async function FleetHealthPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requireSignedInUser();
-  const query = parseFleetQuery(await searchParams);
+  const search = await searchParams;
+  const query = parseFleetQuery(search);
+  const paging = parseFleetPage(search);
   const all = await fleetHealth(getPrisma());
   const system = user.unitSystem;
   if (all.length === 0) {
@@ -92,7 +152,9 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
     );
   }
   const rows = applyFleetQuery(all, query);
+  // The summary strip and the counts cover every matching row; only the table is paged.
   const totals = fleetTotals(rows);
+  const slice = sliceFleetPage(rows, paging);
   const sites = [...new Map(all.map((row) => [row.siteCode, row.siteName])).entries()];
   const units = [...new Map(all.filter((row) => !query.site || row.siteCode === query.site).map((row) => [row.unitCode, row.unitName])).entries()].sort();
   const services = [...new Set(all.map((row) => row.service))].sort();
@@ -103,9 +165,9 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
       <h1>Fleet health</h1>
       {can(user.role, "assets.edit") ? <p className="actions"><Link href="/assets/new">Register an exchanger</Link></p> : null}
 
-      <section aria-label="Summary of the exchangers shown" className="summary-strip">
+      <section aria-label="Summary of the exchangers that match the filters" className="summary-strip">
         {FLEET_STATUSES.map((status) => (
-          <Link key={status} href={`/${fleetQueryString({ ...query, status: query.status === status ? null : status })}`} className={`summary-tile${query.status === status ? " selected" : ""}`} aria-current={query.status === status ? "true" : undefined}>
+          <Link key={status} href={fleetFilterLink({ ...query, status: query.status === status ? null : status }, paging.per)} className={`summary-tile${query.status === status ? " selected" : ""}`} aria-current={query.status === status ? "true" : undefined}>
             <span className="summary-value">{totals.byStatus[status]}</span>
             <span className="summary-label"><FleetStatusShape status={status} /> {FLEET_STATUS_LABELS[status]}</span>
           </Link>
@@ -155,16 +217,17 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
         </label>
         {query.sort !== DEFAULT_FLEET_QUERY.sort ? <input type="hidden" name="sort" value={query.sort} /> : null}
         <input type="hidden" name="dir" value={query.dir} />
+        {paging.per !== DEFAULT_FLEET_PAGE.per ? <input type="hidden" name="per" value={paging.per} /> : null}
         <button type="submit" className="primary">Apply</button>
-        {filtered ? <Link href={`/${fleetQueryString({ ...DEFAULT_FLEET_QUERY, sort: query.sort, dir: query.dir })}`}>Clear filters</Link> : null}
+        {filtered ? <Link href={fleetFilterLink({ ...DEFAULT_FLEET_QUERY, sort: query.sort, dir: query.dir }, paging.per)}>Clear filters</Link> : null}
       </form>
 
       <p className="subtle" role="status">
-        {rows.length} of {all.length} exchangers. Latest assessment {formatDate(latestAsOf, all[0]?.siteTimeZone ?? "UTC")}. Dates in each site&apos;s time zone; units {system === "us" ? "US customary" : "SI"} (<Link href="/account">change</Link>).
+        {rows.length} of {all.length} exchangers{slice.rows.length < rows.length ? `; showing rows ${slice.firstRow}–${slice.lastRow} (page ${slice.page} of ${slice.pageCount})` : ""}. Latest assessment {formatDate(latestAsOf, all[0]?.siteTimeZone ?? "UTC")}. Dates in each site&apos;s time zone; units {system === "us" ? "US customary" : "SI"} (<Link href="/account">change</Link>).
       </p>
 
       {rows.length === 0 ? (
-        <p className="empty">No exchangers match these filters. <Link href="/">Show the whole fleet</Link>.</p>
+        <p className="empty">No exchangers match these filters. <Link href={fleetFilterLink(DEFAULT_FLEET_QUERY, paging.per)}>Show the whole fleet</Link>.</p>
       ) : (
         <div className="table-scroll">
           <table className="grid fleet-table" aria-label="Fleet health">
@@ -175,6 +238,7 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
                     key={column.key}
                     column={column}
                     query={query}
+                    per={paging.per}
                     {...(column.key === "fouling" ? { unit: displayUnit(system, "foulingResistance").label } : column.key === "dutyLoss" ? { unit: displayUnit(system, "duty").label } : {})}
                   />
                 ))}
@@ -182,7 +246,7 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
               </tr>
             </thead>
             <tbody>
-              {rows.map((row) => {
+              {slice.rows.map((row) => {
                 const summary = row.summary;
                 const href = `/assets/${encodeURIComponent(row.tag)}`;
                 return (
@@ -208,6 +272,7 @@ export default async function FleetHealthPage({ searchParams }: { searchParams: 
           </table>
         </div>
       )}
+      {rows.length > 0 ? <FleetPager query={query} slice={slice} /> : null}
 
       <section aria-labelledby="legend-heading" className="panel status-legend">
         <h2 id="legend-heading">What the conditions mean</h2>

@@ -4,8 +4,9 @@
 // The server runs the build in .next-bench (made on first use, or again with --build).
 // Run: node --import tsx scripts/bench/api-load.ts [--assets 500] [--connections 20] [--seconds 10] [--requests 3000]
 //      [--url http://127.0.0.1:3000 (use a running server; its own database)] [--port 3311] [--build] [--json]
-//      [--paths /api/health,/api/fleet (instead of the three above)] [--server-pid PID (with --url: for CPU per request)]
-//      [--gzip (send Accept-Encoding: gzip, as browsers and most HTTP clients do; autocannon does not inflate)]
+//      [--paths /api/health,/api/fleet,gzip:/api/fleet (instead of the default list)] [--server-pid PID (with --url)]
+// A path written gzip:/… is asked for with Accept-Encoding: gzip, as browsers and most HTTP clients do (autocannon
+// counts the compressed bytes and does not inflate them).
 // Database: foulcast_bench_<assets> on DATABASE_URL's server, else on the local PostgreSQL at 127.0.0.1:5432; made,
 // filled (demo fleet, then copies: scripts/bench/bench-fleet.ts, a few minutes the first time) and kept for reruns.
 import autocannon from "autocannon";
@@ -27,6 +28,8 @@ function textOption(name: string): string | undefined {
 
 export interface EndpointFigures {
   path: string;
+  /** The request's Accept-Encoding, when it sent one. */
+  acceptEncoding: string | null;
   requests: number;
   requestsPerSecond: number;
   p50Ms: number;
@@ -91,13 +94,15 @@ async function signIn(base: string): Promise<string> {
   return cookies.join("; ");
 }
 
-async function load(base: string, path: string, cookie: string, connections: number, seconds: number, requests: number, serverPid: number | null): Promise<EndpointFigures> {
+async function load(base: string, entry: string, cookie: string, connections: number, seconds: number, requests: number, serverPid: number | null): Promise<EndpointFigures> {
+  const acceptEncoding = entry.startsWith("gzip:") ? "gzip" : null;
+  const path = acceptEncoding ? entry.slice("gzip:".length) : entry;
   // Warm-up: the first requests compile and cache; not measured.
   for (let index = 0; index < 3; index += 1) await fetch(`${base}${path}`, { headers: { cookie } }).then((response) => response.arrayBuffer());
   const latencies: number[] = [];
   const cpuBefore = cpuSeconds(serverPid);
+  const headers: Record<string, string> = { cookie, ...(acceptEncoding ? { "accept-encoding": acceptEncoding } : {}) };
   // autocannon's `amount` would override `duration`; stop at whichever bound comes first instead.
-  const headers: Record<string, string> = { cookie, ...(process.argv.includes("--gzip") ? { "accept-encoding": "gzip" } : {}) };
   const instance = autocannon({ url: `${base}${path}`, connections, duration: seconds, timeout: 30, headers });
   instance.on("response", (_client, _status, _bytes, responseTimeMs) => {
     latencies.push(responseTimeMs);
@@ -108,6 +113,7 @@ async function load(base: string, path: string, cookie: string, connections: num
   latencies.sort((a, b) => a - b);
   return {
     path,
+    acceptEncoding,
     requests: latencies.length,
     requestsPerSecond: Number((latencies.length / result.duration).toFixed(1)),
     p50Ms: percentile(latencies, 0.5),
@@ -165,7 +171,7 @@ async function main(): Promise<void> {
     const tag = list.assets.find((asset) => asset.tag === "E-1105")?.tag ?? list.assets[0]?.tag;
     if (!tag) throw new Error("the server lists no assets");
     const endpoints: EndpointFigures[] = [];
-    const paths = textOption("paths")?.split(",") ?? [fleetApi, `/api/assets/${encodeURIComponent(tag)}/assessment`, "/"];
+    const paths = textOption("paths")?.split(",") ?? [fleetApi, `gzip:${fleetApi}`, `${fleetApi}?trend=1`, `/api/assets/${encodeURIComponent(tag)}/assessment`, "/", "/?per=all"];
     for (const path of paths) {
       log(`autocannon ${path}: ${connections} connections, at most ${seconds} s or ${requests} requests`);
       const figures = await load(base, path, cookie, connections, seconds, requests, serverPid);

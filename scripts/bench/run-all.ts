@@ -1,4 +1,4 @@
-// `npm run bench [-- --only import,assess,planner,api,workers]`: runs the benchmarks with bounded sizes (about 10–15
+// `npm run bench [-- --only import,assess,planner,session,api,workers]`: runs the benchmarks with bounded sizes (about 10–15
 // minutes in all on a 2-core machine, more the first time, when the API and worker fleets are made), prints a table
 // of figures and ratios, and writes docs/benchmarks.md with the machine, the date and the load average.
 // Each benchmark runs in its own process, one after another; figures of a shared machine vary with the other work.
@@ -8,7 +8,7 @@ import os from "node:os";
 import pg from "pg";
 import { benchServerUrl } from "./bench-fleet";
 
-const STEPS = ["import", "assess", "planner", "api", "workers"] as const;
+const STEPS = ["import", "assess", "planner", "session", "api", "workers"] as const;
 type Step = (typeof STEPS)[number];
 
 const onlyIndex = process.argv.indexOf("--only");
@@ -48,7 +48,8 @@ interface ImportResult { rows: number; import: { seconds: number; rowsPerSecond:
 interface Timing { wallMs: number; cpuMs: number }
 interface AssessResult { fiveYears: { periods: number; assess: Timing; ols: Timing; ratioWall: number; ratioCpu: number }; demoFleet: { assets: number; assess: Timing; ols: Timing; ratioCpu: number }; many: { count: number; wallMs: number; cpuMs: number } }
 interface PlanResult { fleet: { assets: number; weeks: number }; timesSeconds: { buildCostTables: number; solveWall: number }; status: string; gap: number | null; gapOnTotalCost: number | null; cleanings: number }
-interface Endpoint { path: string; requestsPerSecond: number; p50Ms: number; p95Ms: number; p99Ms: number; non2xx: number; errors: number; serverCpuMsPerRequest: number | null }
+interface SessionResult { calls: number; sessionUser: { cpuMsPerCall: number }; betterAuthGetSession: { cpuMsPerCall: number }; cpuRatio: number }
+interface Endpoint { path: string; acceptEncoding: string | null; requestsPerSecond: number; p50Ms: number; p95Ms: number; p99Ms: number; non2xx: number; errors: number; serverCpuMsPerRequest: number | null }
 interface ApiResult { assets: number; readings: number | null; connections: number; secondsPerEndpoint: number; endpoints: Endpoint[] }
 interface WorkerRun { workers: number; assets: number; wallSeconds: number; jobsPerSecond: number; jobsPerWorker: number[]; workerCpuSeconds: number | null }
 
@@ -74,13 +75,19 @@ const handlers: Record<Step, () => Promise<void>> = {
     rows.push([`cleaning plan, ${result.fleet.assets} exchangers × ${result.fleet.weeks} weeks (HiGHS)`, `build ${fmt(result.timesSeconds.buildCostTables, 2)} s, solve ${fmt(result.timesSeconds.solveWall, 2)} s; ${result.status}, ${result.cleanings} cleanings`, `gap ${result.gap === null ? "—" : `${fmt(result.gap * 100, 3)} %`} (saving), ${result.gapOnTotalCost === null ? "—" : `${fmt(result.gapOnTotalCost * 100, 3)} %`} (total cost); target < 10 s, gap ≤ 1 %`]);
     notes.push(`planner: ${fmt(run.seconds, 0)} s, load average ${run.loadBefore} → ${run.loadAfter}`);
   },
+  session: async () => {
+    const run = await runScript("scripts/bench/session-check.ts", ["--calls", "500", "--json"]);
+    const result = run.result as SessionResult;
+    rows.push([`session check of a request (${result.calls} calls, signed in as the demo viewer)`, `${fmt(result.sessionUser.cpuMsPerCall, 2)} ms CPU per call`, `better-auth getSession ${fmt(result.betterAuthGetSession.cpuMsPerCall, 2)} ms CPU per call (${fmt(result.cpuRatio)}×)`]);
+    notes.push(`session: ${fmt(run.seconds, 0)} s, load average ${run.loadBefore} → ${run.loadAfter}`);
+  },
   api: async () => {
     const run = await runScript("scripts/bench/api-load.ts", ["--build", "--assets", "500", "--connections", "20", "--seconds", "10", "--requests", "3000", "--json"]);
     const result = run.result as ApiResult;
     for (const endpoint of result.endpoints) {
       const target = endpoint.path.startsWith("/api/fleet") || endpoint.path === "/api/assets" ? `; target p95 < 200 ms: ${endpoint.p95Ms < 200 ? "met" : "missed"}` : "";
       rows.push([
-        `GET ${endpoint.path}, ${result.assets} exchangers, ${result.connections} clients, ${result.secondsPerEndpoint} s`,
+        `GET ${endpoint.path}${endpoint.acceptEncoding ? ` (Accept-Encoding: ${endpoint.acceptEncoding})` : ""}, ${result.assets} exchangers, ${result.connections} clients, ${result.secondsPerEndpoint} s`,
         `${fmt(endpoint.requestsPerSecond)} req/s; p50 ${fmt(endpoint.p50Ms, 0)} ms, p95 ${fmt(endpoint.p95Ms, 0)} ms, p99 ${fmt(endpoint.p99Ms, 0)} ms`,
         `server CPU ${endpoint.serverCpuMsPerRequest === null ? "?" : fmt(endpoint.serverCpuMsPerRequest)} ms/request; ${endpoint.non2xx} non-2xx, ${endpoint.errors} errors${target}`,
       ]);
@@ -167,10 +174,14 @@ ${notes.map((note) => `- ${note}`).join("\n")}
   per-cycle trend models, forecasts), pure computation, against a straight-line least-squares fit of the same daily Rf
   series (lib/core/fit QR): the ratio is what the model costs over the plainest fit.
 - **cleaning plan**: scripts/bench/plan.ts — the seeded 500-exchanger, 52-week instance (docs/planner.md).
+- **session check**: scripts/bench/session-check.ts — in-process CPU of \`sessionUser\` (lib/auth/session-user.ts: the
+  signed cookie checked, then the session and its user in one pooled query), which every page, action and API request
+  runs, against better-auth's \`getSession\` on the same cookie.
 - **GET …**: scripts/bench/api-load.ts — autocannon on loopback against a production build of the working tree (made
   at the start of the step into .next-bench), served by \`npm start -- --no-build\` on a 500-exchanger fleet (the 24 demo exchangers and copies of them, 19,704 hourly readings
   each), signed in as the demo viewer. Latency percentiles are over every answered request; server CPU per request
-  is the web server process's CPU time divided by the requests answered.
+  is the web server process's CPU time divided by the requests answered. \`GET /api/fleet\` without trend=1 leaves out
+  the trend line points; with Accept-Encoding: gzip the same answer travels compressed.
 - **reassessment jobs**: scripts/bench/workers.ts — every exchanger queued on "reassess-asset", taken by one, then two
   \`npm run worker\` processes (one job at a time each), from the first job queued to the last completed.
 `;

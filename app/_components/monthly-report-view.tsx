@@ -4,6 +4,7 @@ import { AdvisoryCaution } from "./advisory-caution";
 import { FleetStatusMark } from "./fleet-status-mark";
 import { CategoryChart, CostChart } from "./report-charts";
 import { FLEET_STATUS_LABELS } from "@/lib/planning/fleet-status";
+import { formatQuantity, type UnitSystem } from "@/lib/present/display-units";
 import { formatDutyMW, formatMoney, formatSignificant } from "@/lib/present/format";
 import type { MonthlyReport } from "@/lib/report/monthly-report";
 
@@ -17,6 +18,20 @@ function Change({ value, format, risingIsWorse = true }: { value: number; format
 /** A power change: MW from 0.1 MW up, kW below (a change of −0.004 MW reads better as −3.97 kW). */
 function formatPowerChange(watts: number): string {
   return Math.abs(watts) >= 1e5 ? formatDutyMW(watts) : `${formatSignificant(watts / 1e3, 3)} kW`;
+}
+
+/** Duty figures in the reader's units: site and unit totals in MW (SI) or MMBtu/h (US customary). */
+interface DutyFormat {
+  total: (watts: number) => string;
+  change: (watts: number) => string;
+}
+
+function dutyFormat(system: UnitSystem): DutyFormat {
+  if (system === "us") {
+    const us = (watts: number) => formatQuantity("us", "duty", watts, 3);
+    return { total: us, change: us };
+  }
+  return { total: formatDutyMW, change: formatPowerChange };
 }
 
 function percent(value: number | null): string {
@@ -48,7 +63,7 @@ function Header({ report, siteCode }: { report: MonthlyReport; siteCode: string 
   );
 }
 
-function Condition({ report }: { report: MonthlyReport }) {
+function Condition({ report, duty }: { report: MonthlyReport; duty: DutyFormat }) {
   const { totals, month, previousMonth: before, site } = report;
   const actNow = report.categories.find((category) => category.status === "act-now");
   const money = (value: number) => formatMoney(value, site.currency);
@@ -63,8 +78,8 @@ function Condition({ report }: { report: MonthlyReport }) {
         </div>
         <div className="tile">
           <div className="label">Duty lost at reference conditions</div>
-          <div className="value">{formatDutyMW(totals.dutyLossW)}</div>
-          <Change value={totals.dutyLossW - totals.previousDutyLossW} format={formatPowerChange} /> <span className="subtle change">vs {before.label}</span>
+          <div className="value">{duty.total(totals.dutyLossW)}</div>
+          <Change value={totals.dutyLossW - totals.previousDutyLossW} format={duty.change} /> <span className="subtle change">vs {before.label}</span>
         </div>
         <div className="tile">
           <div className="label">{FLEET_STATUS_LABELS["act-now"]}</div>
@@ -121,7 +136,7 @@ function Condition({ report }: { report: MonthlyReport }) {
   );
 }
 
-function Units({ report }: { report: MonthlyReport }) {
+function Units({ report, duty }: { report: MonthlyReport; duty: DutyFormat }) {
   const { site, month, previousMonth: before } = report;
   return (
     <section aria-labelledby="units" className="keep">
@@ -131,9 +146,9 @@ function Units({ report }: { report: MonthlyReport }) {
           <thead><tr><th scope="col">Unit</th><th scope="col" className="num">Exchangers</th><th scope="col" className="num">Per day, end of {before.label}</th><th scope="col" className="num">Per day, end of {month.label}</th><th scope="col" className="num">Duty lost</th></tr></thead>
           <tbody>
             {report.units.map((unit) => (
-              <tr key={unit.code}><td>{unit.code} {unit.name}</td><td className="num">{unit.assets}</td><td className="num">{formatMoney(unit.previousCostPerDay, site.currency)}</td><td className="num">{formatMoney(unit.costPerDay, site.currency)}</td><td className="num">{formatDutyMW(unit.dutyLossW)}</td></tr>
+              <tr key={unit.code}><td>{unit.code} {unit.name}</td><td className="num">{unit.assets}</td><td className="num">{formatMoney(unit.previousCostPerDay, site.currency)}</td><td className="num">{formatMoney(unit.costPerDay, site.currency)}</td><td className="num">{duty.total(unit.dutyLossW)}</td></tr>
             ))}
-            <tr className="total"><td>Site</td><td className="num">{report.assetCount}</td><td className="num">{formatMoney(report.totals.previousCostPerDay, site.currency)}</td><td className="num">{formatMoney(report.totals.costPerDay, site.currency)}</td><td className="num">{formatDutyMW(report.totals.dutyLossW)}</td></tr>
+            <tr className="total"><td>Site</td><td className="num">{report.assetCount}</td><td className="num">{formatMoney(report.totals.previousCostPerDay, site.currency)}</td><td className="num">{formatMoney(report.totals.costPerDay, site.currency)}</td><td className="num">{duty.total(report.totals.dutyLossW)}</td></tr>
           </tbody>
         </table>
         <CostChart
@@ -148,7 +163,7 @@ function Units({ report }: { report: MonthlyReport }) {
   );
 }
 
-function TopAssets({ report }: { report: MonthlyReport }) {
+function TopAssets({ report, duty }: { report: MonthlyReport; duty: DutyFormat }) {
   const { site, month, previousMonth: before } = report;
   if (report.topAssets.length === 0) return <section aria-labelledby="top"><h2 id="top">Exchangers costing most</h2><p className="subtle">No exchanger had a cost of fouling at the end of {month.label}.</p></section>;
   return (
@@ -166,7 +181,7 @@ function TopAssets({ report }: { report: MonthlyReport }) {
               <td><FleetStatusMark status={asset.status} /></td>
               <td className="num">{formatMoney(asset.costPerDay, site.currency)}</td>
               <td className="num">{formatMoney(asset.previousCostPerDay, site.currency)}</td>
-              <td className="num">{asset.dutyLossW === null ? "—" : formatDutyMW(asset.dutyLossW)}</td>
+              <td className="num">{asset.dutyLossW === null ? "—" : duty.total(asset.dutyLossW)}</td>
               <td className="num">{percent(asset.percentOfClean)}</td>
             </tr>
           ))}
@@ -266,14 +281,16 @@ function Alerts({ report }: { report: MonthlyReport }) {
  * MonthlyReportView: the whole report in an <article data-report-month="YYYY-MM"> (the PDF route waits for that
  * attribute); `navigation` goes under the heading and is hidden in print.
  */
-export function MonthlyReportView({ report, navigation }: { report: MonthlyReport; navigation?: ReactNode }) {
+/** `unitSystem`: the reader's units for duty (default SI). */
+export function MonthlyReportView({ report, navigation, unitSystem = "si" }: { report: MonthlyReport; navigation?: ReactNode; unitSystem?: UnitSystem }) {
+  const duty = dutyFormat(unitSystem);
   return (
     <article className="report" data-report-month={report.month.key}>
       <Header report={report} siteCode={report.site.code} />
       {navigation}
-      <Condition report={report} />
-      <Units report={report} />
-      <TopAssets report={report} />
+      <Condition report={report} duty={duty} />
+      <Units report={report} duty={duty} />
+      <TopAssets report={report} duty={duty} />
       <Cleanings report={report} />
       <Alerts report={report} />
       <AdvisoryCaution />

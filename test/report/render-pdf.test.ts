@@ -100,6 +100,21 @@ async function readPdf(pdf: Buffer): Promise<{ pages: number; text: string[]; si
   return { pages, text, sizes };
 }
 
+describe("MonthlyReportView units", () => {
+  // Duty lost at the month end: Σ 2e4·i W for i = 1..24 = 6.00 MW; the last month 5.40 MW, a change of 0.60 MW.
+  // 1 Btu_IT/h = 0.293 071 1 W (NIST SP 811, Appendix B.8), so 6.00 MW = 20.5 MMBtu/h and 0.60 MW = 2.05 MMBtu/h.
+  it("shows duty in MW for SI readers and in MMBtu/h for US customary readers", () => {
+    const si = renderToStaticMarkup(createElement(MonthlyReportView, { report: fixture() }));
+    expect(si).toContain(">6.00 MW<");
+    expect(si).toContain("+0.600 MW");
+    expect(si).not.toContain("MMBtu/h");
+    const us = renderToStaticMarkup(createElement(MonthlyReportView, { report: fixture(), unitSystem: "us" }));
+    expect(us).toContain(">20.5 MMBtu/h<");
+    expect(us).toContain("+2.05 MMBtu/h");
+    expect(us).not.toMatch(/\d MW/);
+  });
+});
+
 describe("parseCookieHeader", () => {
   it("splits a Cookie header into pairs and keeps values with '=' whole", () => {
     expect(parseCookieHeader("better-auth.session_token=abc.def=; theme=dark;; =bad; spaced = 1 ")).toEqual([

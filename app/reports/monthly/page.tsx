@@ -12,7 +12,7 @@ type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 const one = (value: string | string[] | undefined): string | undefined => (Array.isArray(value) ? value[0] : value);
 
 export default async function MonthlyReportPage({ searchParams }: { searchParams: SearchParams }) {
-  await requireSignedInUser();
+  const user = await requireSignedInUser();
   const params = await searchParams;
   const prisma = getPrisma();
   let resolved;
@@ -38,6 +38,7 @@ export default async function MonthlyReportPage({ searchParams }: { searchParams
   return (
     <MonthlyReportView
       report={report}
+      unitSystem={user.unitSystem}
       navigation={
         <nav className="report-actions screen-only" aria-label="Other months" style={{ marginTop: "0.4rem" }}>
           {keys.has(earlier) ? <Link href={link(earlier)}>← {previousMonth(month).label}</Link> : null}

@@ -1,8 +1,7 @@
 // The assessment's input from stored rows: the register entry, the daily screened periods and the cleaning records.
 import type { Asset, Cleaning, OperatingPeriod } from "../../generated/prisma/client";
 import type { AssessmentInput, AssessmentPeriod } from "../core/assessment";
-import { arrangementFromColumns } from "./asset-columns";
-import { assetHeatCapacities } from "./exchanger-model";
+import { assetReferenceRating } from "./exchanger-model";
 
 /** The stored period columns the assessment reads. */
 export type StoredAssessmentPeriod = Pick<
@@ -48,16 +47,11 @@ export function assessmentPeriods(stored: readonly StoredAssessmentPeriod[]): As
  * cleaning records. Each cleaning's fouling clock starts at its return to service (endDate, or date without one).
  */
 export function assessmentInput(asset: Asset, periods: AssessmentPeriod[], cleanings: readonly Pick<Cleaning, "date" | "endDate" | "method" | "costCents">[], asOfMs: number): AssessmentInput {
-  const capacities = assetHeatCapacities(asset);
   return {
     asset: {
-      arrangement: arrangementFromColumns(asset),
-      areaM2: asset.areaM2,
-      hotHeatCapacity: capacities.hot,
-      coldHeatCapacity: capacities.cold,
+      ...assetReferenceRating(asset),
       designUWPerM2K: asset.designUWPerM2K,
       designFoulingM2KPerW: asset.designFoulingM2KPerW,
-      reference: { hotInletK: asset.refHotInletK, coldInletK: asset.refColdInletK, hotFlowKgPerS: asset.refHotFlowKgPerS, coldFlowKgPerS: asset.refColdFlowKgPerS },
       dutyThresholdW: asset.dutyThresholdW,
       ...(asset.minimumOutletK !== null && (asset.minimumOutletStream === "hot" || asset.minimumOutletStream === "cold")
         ? { minimumOutlet: { stream: asset.minimumOutletStream, temperatureK: asset.minimumOutletK } }

@@ -1,5 +1,6 @@
 // Builds the core's exchanger descriptions from an asset register row.
 import type { Asset, Instrument } from "../../generated/prisma/client";
+import type { ReferenceConditions } from "../core/forecast/types";
 import type { ExchangerModel, InstrumentRole } from "../core/screening/types";
 import type { HeatCapacity } from "../core/thermal";
 import { arrangementFromColumns, heatCapacityFromColumns } from "./asset-columns";
@@ -14,6 +15,18 @@ export function assetHeatCapacities(asset: Asset): { hot: HeatCapacity; cold: He
   return {
     hot: heatCapacityFromColumns({ kind: asset.hotCpKind, intercept: asset.hotCpIntercept, slope: asset.hotCpSlope, pressurePa: asset.hotCpPressurePa }),
     cold: heatCapacityFromColumns({ kind: asset.coldCpKind, intercept: asset.coldCpIntercept, slope: asset.coldCpSlope, pressurePa: asset.coldCpPressurePa }),
+  };
+}
+
+/** The asset's geometry, stream heat capacities and reference conditions (inlets and flows) from its register row. */
+export function assetReferenceRating(asset: Asset): Omit<ReferenceConditions, "cleanResistanceM2KPerW"> {
+  const capacities = assetHeatCapacities(asset);
+  return {
+    arrangement: arrangementFromColumns(asset),
+    areaM2: asset.areaM2,
+    hotHeatCapacity: capacities.hot,
+    coldHeatCapacity: capacities.cold,
+    reference: { hotInletK: asset.refHotInletK, coldInletK: asset.refColdInletK, hotFlowKgPerS: asset.refHotFlowKgPerS, coldFlowKgPerS: asset.refColdFlowKgPerS },
   };
 }
 

@@ -3,8 +3,7 @@
 import type { PrismaClient } from "../../generated/prisma/client";
 import type { Assessment } from "../core/assessment";
 import { assetChartsSI, type AssetChartsSI, type ChartAlert, type ChartPeriod } from "../present/asset-charts";
-import { arrangementFromColumns } from "./asset-columns";
-import { assetHeatCapacities } from "./exchanger-model";
+import { assetReferenceRating } from "./exchanger-model";
 import { getAsset, type AssetDetail } from "./get-asset";
 
 const DAY_S = 86_400;
@@ -45,19 +44,12 @@ export async function buildAssetCharts(
   const periods = await listChartPeriods(prisma, asset.id);
   const last = periods[periods.length - 1];
   const endMs = last ? last.startMs + DAY_S * 1000 : assessment.asOfMs;
-  const capacities = assetHeatCapacities(asset);
   return assetChartsSI({
     assessment,
     periods,
     alerts: chartAlerts(alerts, endMs),
     cleaningsMs: asset.cleanings.map((cleaning) => (cleaning.endDate ?? cleaning.date).getTime()),
-    rating: {
-      arrangement: arrangementFromColumns(asset),
-      areaM2: asset.areaM2,
-      hotHeatCapacity: capacities.hot,
-      coldHeatCapacity: capacities.cold,
-      reference: { hotInletK: asset.refHotInletK, coldInletK: asset.refColdInletK, hotFlowKgPerS: asset.refHotFlowKgPerS, coldFlowKgPerS: asset.refColdFlowKgPerS },
-    },
+    rating: assetReferenceRating(asset),
     designUWPerM2K: asset.designUWPerM2K,
     designFoulingM2KPerW: asset.designFoulingM2KPerW,
     dutyThresholdW: asset.dutyThresholdW,

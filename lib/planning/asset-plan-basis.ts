@@ -4,8 +4,7 @@ import type { Assessment } from "../core/assessment";
 import type { AssetEconomics } from "../core/economics";
 import { EconomicsInputError } from "../core/economics";
 import type { ThresholdCrossing } from "../core/plan";
-import { arrangementFromColumns } from "../data/asset-columns";
-import { assetHeatCapacities } from "../data/exchanger-model";
+import { assetReferenceRating } from "../data/exchanger-model";
 import { assetEconomics } from "./asset-economics";
 import { cycleForecasts, type CycleForecasts } from "./cycle-forecasts";
 
@@ -27,14 +26,7 @@ export type AssetPlanBasis =
 export function assetPlanBasis(asset: Asset, site: Site, stored: Pick<AssetAssessment, "result"> | null): AssetPlanBasis {
   if (!stored) return { ok: false, reason: "not assessed yet (no usable operating data)" };
   const assessment = stored.result as unknown as Assessment;
-  const capacities = assetHeatCapacities(asset);
-  const forecasts = cycleForecasts(assessment, {
-    arrangement: arrangementFromColumns(asset),
-    areaM2: asset.areaM2,
-    hotHeatCapacity: capacities.hot,
-    coldHeatCapacity: capacities.cold,
-    reference: { hotInletK: asset.refHotInletK, coldInletK: asset.refColdInletK, hotFlowKgPerS: asset.refHotFlowKgPerS, coldFlowKgPerS: asset.refColdFlowKgPerS },
-  });
+  const forecasts = cycleForecasts(assessment, assetReferenceRating(asset));
   if (!forecasts.ok) return forecasts;
   let economics: AssetEconomics;
   try {

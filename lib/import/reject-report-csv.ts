@@ -1,11 +1,11 @@
 // The reject report of an import as CSV (line, reason), safe to open in a spreadsheet.
-import { spreadsheetCsvField, spreadsheetText } from "../present/spreadsheet-text";
+import { spreadsheetCsvField, spreadsheetText } from "../core/export/spreadsheet-text";
 import type { RejectedRow } from "./import-errors";
 
 /**
  * Neutralises spreadsheet formula injection: a cell starting with = + - @ tab or carriage return (and NUL, LF) is
  * prefixed with a single quote, so a spreadsheet shows it as text instead of evaluating it (OWASP, "CSV Injection").
- * Kept as a name for callers; the rule lives in lib/present/spreadsheet-text.ts.
+ * Kept as a name for callers; the rule lives in lib/core/export/spreadsheet-text.ts.
  */
 export const neutraliseFormula = spreadsheetText;
 

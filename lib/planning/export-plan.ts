@@ -3,7 +3,7 @@ import writeXlsxFile, { type SheetData } from "write-excel-file/node";
 import type { PlanRun } from "../../generated/prisma/client";
 import { planToCsv, planToICalendar, type CleaningPlan } from "../core/plan";
 import { ADVISORY_NOTICE } from "../data/assessment-document";
-import { spreadsheetText } from "../present/spreadsheet-text";
+import { spreadsheetText } from "../core/export/spreadsheet-text";
 import { planDocument, type PlanDocument } from "./plan-document";
 
 export type PlanExportFormat = "ics" | "csv" | "xlsx";

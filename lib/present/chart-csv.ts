@@ -1,7 +1,7 @@
 // CSV downloads of the asset charts: a header row naming each column's unit, one row per point, RFC 4180 text
 // (CRLF line ends) with every text cell made safe against spreadsheet formula injection (spreadsheetCsvField).
 import type { AssetChartName, AssetChartsDisplay } from "./asset-charts";
-import { spreadsheetCsvField } from "./spreadsheet-text";
+import { spreadsheetCsvField } from "../core/export/spreadsheet-text";
 
 /** RFC 4180 §2 rule 1: each record ends with CRLF. */
 const LINE_END = "\r\n";

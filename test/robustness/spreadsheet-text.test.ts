@@ -2,7 +2,7 @@ import { parse } from "csv-parse/sync";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { rejectsToCsv } from "../../lib/import/reject-report-csv";
-import { FORMULA_TRIGGERS, spreadsheetCsvField, spreadsheetText } from "../../lib/present/spreadsheet-text";
+import { FORMULA_TRIGGERS, spreadsheetCsvField, spreadsheetText } from "../../lib/core/export/spreadsheet-text";
 
 // Text biased towards the characters that matter: formula triggers, delimiters, quotes and line breaks.
 const dangerous = fc.constantFrom("=", "+", "-", "@", "\t", "\r", "\n", "\0", ",", ";", '"', "'", " ", "A1", "cmd|' /C calc'!A0", "HYPERLINK(", "SUM(1,2)", "é", "😀");

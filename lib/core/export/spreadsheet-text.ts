@@ -1,4 +1,5 @@
-// User-entered text made safe for spreadsheet exports (CSV and XLSX): no cell can start a formula.
+// User-entered text made safe for spreadsheet exports (CSV and XLSX): no cell can start a formula. Pure; the
+// core (plan CSV) and the presentation layer (chart CSV, reject reports, XLSX) share this one rule.
 
 /**
  * First characters that make a spreadsheet read a text cell as a formula or start one: = + - @ tab and carriage

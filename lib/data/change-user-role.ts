@@ -2,6 +2,7 @@
 import type { PrismaClient } from "../../generated/prisma/client";
 import { isRole, ROLES, type Role } from "../auth/permissions";
 import { UserAccountError } from "./create-user";
+import { ensureAnotherAdmin } from "./ensure-another-admin";
 import { recordAudit, type Actor } from "./record-audit";
 
 /** Refuses to leave the site without an admin. */
@@ -11,12 +12,7 @@ export async function changeUserRole(prisma: PrismaClient, userId: string, role:
     const user = await tx.user.findUnique({ where: { id: userId }, select: { email: true, role: true } });
     if (!user) throw new UserAccountError(`user: no user with id ${userId}`);
     if (user.role === role) return { email: user.email, before: user.role, after: role, changed: false };
-    if (user.role === "admin") {
-      // Serialise concurrent demotions so two admins cannot demote each other at once.
-      await tx.$executeRawUnsafe(`select pg_advisory_xact_lock(hashtext('foulcast.user-roles'))`);
-      const admins = await tx.user.count({ where: { role: "admin" } });
-      if (admins <= 1) throw new UserAccountError(`role: ${user.email} is the only admin; make another user admin first`);
-    }
+    await ensureAnotherAdmin(tx, user, "role");
     await tx.user.update({ where: { id: userId }, data: { role } });
     await recordAudit(tx, {
       userId: by.userId,

@@ -30,9 +30,15 @@ export function newUserProblems(user: NewUser): string[] {
   const problems: string[] = [];
   if (!/^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(normaliseEmail(user.email))) problems.push(`email: "${user.email}" is not an email address`);
   if (!isRole(user.role)) problems.push(`role: must be one of ${ROLES.join(", ")}, got "${user.role}"`);
-  if (user.password.length < MIN_PASSWORD_LENGTH) problems.push(`password: must be at least ${MIN_PASSWORD_LENGTH} characters`);
-  if (user.password.length > MAX_PASSWORD_LENGTH) problems.push(`password: must be at most ${MAX_PASSWORD_LENGTH} characters`);
+  problems.push(...passwordProblems(user.password));
   return problems;
+}
+
+/** Every problem with a password (new account or new password), naming the field; empty when it is fine. */
+export function passwordProblems(password: string): string[] {
+  if (password.length < MIN_PASSWORD_LENGTH) return [`password: must be at least ${MIN_PASSWORD_LENGTH} characters`];
+  if (password.length > MAX_PASSWORD_LENGTH) return [`password: must be at most ${MAX_PASSWORD_LENGTH} characters`];
+  return [];
 }
 
 export async function createUser(prisma: PrismaClient, user: NewUser, by: Actor): Promise<{ id: string; email: string; role: Role }> {

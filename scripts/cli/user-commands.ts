@@ -1,10 +1,13 @@
-// User accounts for real sites: add, list, change a role. Changes are audited as cli:<os user>.
+// User accounts for real sites: add, list, change a role, set a new password, remove. Changes are audited as
+// cli:<os user>.
 import type { Command } from "commander";
 import os from "node:os";
 import { ROLES } from "../../lib/auth/permissions";
 import { changeUserRole } from "../../lib/data/change-user-role";
 import { createUser, normaliseEmail, UserAccountError } from "../../lib/data/create-user";
 import { listUsers } from "../../lib/data/list-users";
+import { removeUser } from "../../lib/data/remove-user";
+import { setUserPassword } from "../../lib/data/set-user-password";
 import { getPrisma } from "../../lib/db";
 import { printJson, UsageError, withDatabase } from "./context";
 
@@ -20,6 +23,24 @@ async function readFirstLine(): Promise<string> {
   return text.split(/\r?\n/)[0] ?? "";
 }
 
+/** The id of the user with `email` (compared lower-case), or a UsageError naming the email. */
+async function userIdByEmail(email: string): Promise<string> {
+  const normalised = normaliseEmail(email);
+  const found = await getPrisma().user.findUnique({ where: { email: normalised }, select: { id: true } });
+  if (!found) throw new UsageError(`no user with email ${normalised}`);
+  return found.id;
+}
+
+/** Runs a data function, turning its UserAccountError (the user's mistake) into a UsageError (message, exit 1). */
+async function asUsage<T>(work: () => Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (error) {
+    if (error instanceof UserAccountError) throw new UsageError(error.message);
+    throw error;
+  }
+}
+
 export function registerUserCommands(program: Command): void {
   const user = program.command("user").description("user accounts and roles (viewer, engineer, planner, admin)");
   user
@@ -32,13 +53,8 @@ export function registerUserCommands(program: Command): void {
     .action(async (options: { email: string; role: string; password?: string; name?: string }) => {
       const password = options.password ?? (await readFirstLine());
       await withDatabase(async () => {
-        try {
-          const created = await createUser(getPrisma(), { email: options.email, role: options.role, password, name: options.name }, cliActor());
-          console.log(`Created ${created.email} with role ${created.role}.`);
-        } catch (error) {
-          if (error instanceof UserAccountError) throw new UsageError(error.message);
-          throw error;
-        }
+        const created = await asUsage(() => createUser(getPrisma(), { email: options.email, role: options.role, password, name: options.name }, cliActor()));
+        console.log(`Created ${created.email} with role ${created.role}.`);
       });
     });
   user
@@ -60,16 +76,30 @@ export function registerUserCommands(program: Command): void {
     .requiredOption("--role <role>", ROLES.join(" | "))
     .action(async (options: { email: string; role: string }) => {
       await withDatabase(async () => {
-        const email = normaliseEmail(options.email);
-        const found = await getPrisma().user.findUnique({ where: { email }, select: { id: true } });
-        if (!found) throw new UsageError(`no user with email ${email}`);
-        try {
-          const result = await changeUserRole(getPrisma(), found.id, options.role, cliActor());
-          console.log(result.changed ? `${result.email}: ${result.before} -> ${result.after}.` : `${result.email} already has the role ${result.after}.`);
-        } catch (error) {
-          if (error instanceof UserAccountError) throw new UsageError(error.message);
-          throw error;
-        }
+        const result = await asUsage(async () => changeUserRole(getPrisma(), await userIdByEmail(options.email), options.role, cliActor()));
+        console.log(result.changed ? `${result.email}: ${result.before} -> ${result.after}.` : `${result.email} already has the role ${result.after}.`);
+      });
+    });
+  user
+    .command("password")
+    .description("set a new password for a user and end all their sessions; without --password it is read from the first line of standard input")
+    .requiredOption("--email <email>", "the user's email")
+    .option("--password <password>", "the new password (8 to 128 characters)")
+    .action(async (options: { email: string; password?: string }) => {
+      const password = options.password ?? (await readFirstLine());
+      await withDatabase(async () => {
+        const result = await asUsage(async () => setUserPassword(getPrisma(), await userIdByEmail(options.email), password, cliActor()));
+        console.log(`Set a new password for ${result.email}; ended ${result.sessionsEnded} ${result.sessionsEnded === 1 ? "session" : "sessions"}.`);
+      });
+    });
+  user
+    .command("remove")
+    .description("remove a user with their sessions and sign-in account (refuses the only admin); the audit log keeps their events")
+    .requiredOption("--email <email>", "the user's email")
+    .action(async (options: { email: string }) => {
+      await withDatabase(async () => {
+        const result = await asUsage(async () => removeUser(getPrisma(), await userIdByEmail(options.email), cliActor()));
+        console.log(`Removed ${result.email} (${result.role}); ended ${result.sessionsEnded} ${result.sessionsEnded === 1 ? "session" : "sessions"}.`);
       });
     });
 }

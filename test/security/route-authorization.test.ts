@@ -6,6 +6,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { AccessDenied } from "../../lib/auth/require-role";
+import { sessionUser } from "../../lib/auth/session-user";
 import { exportAssetFile } from "../../lib/data/export-asset-file";
 import { createAsset, parseAssetFile } from "../../lib/data/save-asset";
 import { disconnectPrisma } from "../../lib/db";
@@ -54,6 +55,9 @@ let database: TestDatabase;
 let viewer: TestUser;
 let engineer: TestUser;
 let admin: TestUser;
+/** Targets of the admin actions' positive controls: one gets a new password, one is removed. */
+let passwordTarget: TestUser;
+let removalTarget: TestUser;
 let assetTag: string;
 let alertId: number;
 let assetJson: Record<string, unknown>;
@@ -89,6 +93,8 @@ const ACTION_FIXTURES: Record<string, () => unknown[]> = {
   "assets/[tag]/cleaning-actions.ts#recordCleaningAction": () => [form({ tag: assetTag, date: "2026-06-01", method: "hydroblast" })],
   "admin/users/actions.ts#createUserAction": () => [form({ email: "new-user@test.example", role: "viewer", password: "a long password" })],
   "admin/users/actions.ts#changeUserRoleAction": () => [form({ userId: viewer.id, role: "planner" })],
+  "admin/users/actions.ts#setUserPasswordAction": () => [form({ userId: passwordTarget.id, password: "a new long password" })],
+  "admin/users/actions.ts#removeUserAction": () => [form({ userId: removalTarget.id, email: removalTarget.email, confirm: "yes" })],
 };
 
 function actionArguments(key: string): unknown[] | null {
@@ -144,7 +150,13 @@ beforeAll(async () => {
     data: { assetId: asset.id, role: "hotIn", instrumentTag: "TI-4101A", kind: "bias", start: new Date("2026-04-01T00:00:00Z"), size: 2, sizeUnit: "K", evidence: "test" },
   });
   alertId = alert.id;
-  [viewer, engineer, admin] = await Promise.all([createSignedInUser(database.prisma, "viewer"), createSignedInUser(database.prisma, "engineer"), createSignedInUser(database.prisma, "admin")]);
+  [viewer, engineer, admin, passwordTarget, removalTarget] = await Promise.all([
+    createSignedInUser(database.prisma, "viewer"),
+    createSignedInUser(database.prisma, "engineer"),
+    createSignedInUser(database.prisma, "admin"),
+    createSignedInUser(database.prisma, "engineer"),
+    createSignedInUser(database.prisma, "planner"),
+  ]);
 });
 
 afterAll(async () => {
@@ -259,5 +271,40 @@ describe("self-service server actions", () => {
     expect(event).toMatchObject({ actor: viewer.email, userId: viewer.id, entityId: viewer.id });
     const invalid = await runAction(setUnitSystemAction as (...args: unknown[]) => Promise<unknown>, [form({ unitSystem: "imperial" })], viewer);
     expect(invalid.redirect).toContain("error=");
+  });
+});
+
+describe("admin user actions", () => {
+  type FormAction = (...args: unknown[]) => Promise<unknown>;
+  const usersActions = async () => (await import(path.join(APP, "admin/users/actions.ts"))) as Record<"removeUserAction" | "setUserPasswordAction", FormAction>;
+
+  it("removeUserAction refuses without the ticked confirm box, naming the user, and removes nothing", async () => {
+    const { removeUserAction } = await usersActions();
+    const target = await createSignedInUser(database.prisma, "viewer");
+    const before = await fingerprint();
+    const result = await runAction(removeUserAction, [form({ userId: target.id, email: target.email })], admin);
+    expect(new URL(result.redirect ?? "", "http://localhost").searchParams.get("error")).toBe(`confirm: tick "confirm" beside ${target.email} to remove the account; nothing was removed`);
+    expect(await fingerprint()).toEqual(before);
+    expect(await sessionUser(new Headers({ cookie: target.cookie }))).toMatchObject({ id: target.id });
+  });
+
+  it("removeUserAction refuses the admin's own account with the reason in the page's error", async () => {
+    const { removeUserAction } = await usersActions();
+    const before = await fingerprint();
+    const result = await runAction(removeUserAction, [form({ userId: admin.id, email: admin.email, confirm: "yes" })], admin);
+    expect(new URL(result.redirect ?? "", "http://localhost").searchParams.get("error")).toBe(`user: ${admin.email} is your own account; another admin must remove it`);
+    expect(await fingerprint()).toEqual(before);
+  });
+
+  it("setUserPasswordAction refuses a short password with the field named, and ends the target's sessions when it succeeds", async () => {
+    const { setUserPasswordAction } = await usersActions();
+    const target = await createSignedInUser(database.prisma, "viewer");
+    const before = await fingerprint();
+    const refused = await runAction(setUserPasswordAction, [form({ userId: target.id, password: "short" })], admin);
+    expect(new URL(refused.redirect ?? "", "http://localhost").searchParams.get("error")).toBe("password: must be at least 8 characters");
+    expect(await fingerprint()).toEqual(before);
+    const saved = await runAction(setUserPasswordAction, [form({ userId: target.id, password: "long enough now" })], admin);
+    expect(new URL(saved.redirect ?? "", "http://localhost").searchParams.get("saved")).toBe(`Set a new password for ${target.email}; 1 session ended.`);
+    expect(await sessionUser(new Headers({ cookie: target.cookie }))).toBeNull();
   });
 });

@@ -1,10 +1,10 @@
 import { AccessDenied } from "@/app/_components/access-denied";
 import { requireSignedInUser } from "@/lib/auth/current-user";
 import { can, ROLE_DESCRIPTIONS, ROLES } from "@/lib/auth/permissions";
-import { MIN_PASSWORD_LENGTH } from "@/lib/data/create-user";
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "@/lib/data/create-user";
 import { listUsers } from "@/lib/data/list-users";
 import { getPrisma } from "@/lib/db";
-import { changeUserRoleAction, createUserAction } from "./actions";
+import { changeUserRoleAction, createUserAction, removeUserAction, setUserPasswordAction } from "./actions";
 
 export const dynamic = "force-dynamic";
 
@@ -24,7 +24,7 @@ export default async function UsersPage({ searchParams }: { searchParams: Promis
       <h2>Accounts</h2>
       <table className="grid" aria-label="User accounts">
         <thead>
-          <tr><th scope="col">Email</th><th scope="col">Name</th><th scope="col">Created</th><th scope="col">Signed in since</th><th scope="col">Role</th></tr>
+          <tr><th scope="col">Email</th><th scope="col">Name</th><th scope="col">Created</th><th scope="col">Signed in since</th><th scope="col">Role</th><th scope="col">New password</th><th scope="col">Remove</th></tr>
         </thead>
         <tbody>
           {users.map((row) => (
@@ -43,6 +43,28 @@ export default async function UsersPage({ searchParams }: { searchParams: Promis
                   <button type="submit">Change role</button>
                 </form>
               </td>
+              <td>
+                <form action={setUserPasswordAction} className="actions">
+                  <input type="hidden" name="userId" value={row.id} />
+                  <label className="visually-hidden" htmlFor={`password-${row.id}`}>New password for {row.email}</label>
+                  <input id={`password-${row.id}`} name="password" type="password" required minLength={MIN_PASSWORD_LENGTH} maxLength={MAX_PASSWORD_LENGTH} autoComplete="new-password" />
+                  <button type="submit">Set password</button>
+                </form>
+              </td>
+              <td>
+                {row.id === user.id ? (
+                  <span className="subtle">your account</span>
+                ) : (
+                  <form action={removeUserAction} className="actions">
+                    <input type="hidden" name="userId" value={row.id} />
+                    <input type="hidden" name="email" value={row.email} />
+                    <label>
+                      <input type="checkbox" name="confirm" value="yes" required /> confirm<span className="visually-hidden"> removing {row.email}</span>
+                    </label>
+                    <button type="submit">Remove</button>
+                  </form>
+                )}
+              </td>
             </tr>
           ))}
         </tbody>
@@ -60,7 +82,11 @@ export default async function UsersPage({ searchParams }: { searchParams: Promis
         <label>Initial password <input name="password" type="password" required minLength={MIN_PASSWORD_LENGTH} autoComplete="new-password" /></label>
         <button type="submit">Create user</button>
       </form>
-      <p className="subtle">Give the initial password to the person directly. Every change here is written to the audit log.</p>
+      <p className="subtle">
+        Give the initial or new password to the person directly. Setting a password ends every session of that user at once
+        (your own too, for your own account). Removing a user deletes their account and sessions; the audit log keeps
+        what they did. Every change here is written to the audit log.
+      </p>
     </>
   );
 }

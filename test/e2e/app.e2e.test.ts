@@ -64,6 +64,10 @@ describe.skipIf(!executablePath)("in a real browser", () => {
     await expect.poll(() => viewer.locator("h1").first().innerText(), { timeout: 60_000 }).toMatch(/fleet/i);
     expect(await viewer.getByText(demoUserEmail("viewer")).count()).toBeGreaterThan(0);
     await shot(viewer, "fleet");
+    // the fleet API through the real server: compressed once for a client that accepts gzip (the client inflates it)
+    const fleet = await viewer.request.get(`${app.baseUrl}/api/fleet`, { headers: { "accept-encoding": "gzip" } });
+    expect(fleet.headers()["content-encoding"]).toBe("gzip");
+    expect(((await fleet.json()) as { count: number }).count).toBe(await app.database.prisma.asset.count());
     await viewer.close();
   }, 180_000);
 
@@ -80,7 +84,13 @@ describe.skipIf(!executablePath)("in a real browser", () => {
 
     const page = await signedIn("engineer");
     await page.goto(`${app.baseUrl}/assets/${tag}/import`);
-    await page.getByLabel(/CSV file/).setInputFiles(file);
+    // The form reads the file once React has hydrated it: choose the file again until the preview offers the import.
+    await expect
+      .poll(async () => {
+        await page.getByLabel(/CSV file/).setInputFiles(file);
+        return page.getByRole("button", { name: /^Import e2e-import\.csv/ }).count();
+      }, { timeout: 90_000, interval: 1_000 })
+      .toBe(1);
     await page.getByRole("button", { name: /^Import e2e-import\.csv/ }).click();
     await expect.poll(() => page.locator("#import-result-heading").count(), { timeout: 180_000 }).toBe(1);
     const summary = await page.locator("dl.facts").first().innerText();

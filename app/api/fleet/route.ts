@@ -31,7 +31,7 @@ const fleetAnswer = memoizeRecent(
  * GET /api/fleet?site=&unit=&service=&status=&q=&sort=&dir=&trend=1: the fleet health rows (as on the fleet page,
  * values in SI: W, m²·K/W, W/(m²·K); money in the site currency; instants ISO-8601), filtered and sorted like the
  * page; the Rf trend line points (summary.sparkline) only with trend=1. Unknown sort keys or statuses are ignored.
- * At most FOULCAST_FLEET_CACHE_MS old; gzipped for clients that accept it; ETag and If-None-Match for pollers.
+ * At most FOULCAST_FLEET_CACHE_MS old; ETag and If-None-Match for pollers; Next's server gzips it for clients that accept it.
  */
 export const GET = withRole("read", async (request: Request) => {
   const search = new URL(request.url).searchParams;

@@ -97,11 +97,13 @@ async function signIn(base: string): Promise<string> {
 async function load(base: string, entry: string, cookie: string, connections: number, seconds: number, requests: number, serverPid: number | null): Promise<EndpointFigures> {
   const acceptEncoding = entry.startsWith("gzip:") ? "gzip" : null;
   const path = acceptEncoding ? entry.slice("gzip:".length) : entry;
-  // Warm-up: the first requests compile and cache; not measured.
-  for (let index = 0; index < 3; index += 1) await fetch(`${base}${path}`, { headers: { cookie } }).then((response) => response.arrayBuffer());
+  const headers: Record<string, string> = { cookie, ...(acceptEncoding ? { "accept-encoding": acceptEncoding } : {}) };
+  // Warm-up, not measured: a few requests one by one (the first ones compile and fill caches), then 2 s at the same
+  // concurrency, so the figures are of a server that has been running (JIT-compiled, pools open), as in use.
+  for (let index = 0; index < 3; index += 1) await fetch(`${base}${path}`, { headers }).then((response) => response.arrayBuffer());
+  await autocannon({ url: `${base}${path}`, connections, duration: 2, timeout: 30, headers });
   const latencies: number[] = [];
   const cpuBefore = cpuSeconds(serverPid);
-  const headers: Record<string, string> = { cookie, ...(acceptEncoding ? { "accept-encoding": acceptEncoding } : {}) };
   // autocannon's `amount` would override `duration`; stop at whichever bound comes first instead.
   const instance = autocannon({ url: `${base}${path}`, connections, duration: seconds, timeout: 30, headers });
   instance.on("response", (_client, _status, _bytes, responseTimeMs) => {

@@ -98,10 +98,11 @@ async function load(base: string, entry: string, cookie: string, connections: nu
   const acceptEncoding = entry.startsWith("gzip:") ? "gzip" : null;
   const path = acceptEncoding ? entry.slice("gzip:".length) : entry;
   const headers: Record<string, string> = { cookie, ...(acceptEncoding ? { "accept-encoding": acceptEncoding } : {}) };
-  // Warm-up, not measured: a few requests one by one (the first ones compile and fill caches), then 2 s at the same
-  // concurrency, so the figures are of a server that has been running (JIT-compiled, pools open), as in use.
+  // Warm-up, not measured: a few requests one by one (the first ones compile and fill caches), then one request per
+  // connection at the same concurrency, all answered before the measurement starts (a warm-up by duration would leave
+  // slow pages' requests running into it), so the figures are of a server that has been running, as in use.
   for (let index = 0; index < 3; index += 1) await fetch(`${base}${path}`, { headers }).then((response) => response.arrayBuffer());
-  await autocannon({ url: `${base}${path}`, connections, duration: 2, timeout: 30, headers });
+  await autocannon({ url: `${base}${path}`, connections, amount: connections, timeout: 60, headers });
   const latencies: number[] = [];
   const cpuBefore = cpuSeconds(serverPid);
   // autocannon's `amount` would override `duration`; stop at whichever bound comes first instead.

@@ -6,6 +6,8 @@ declare module "autocannon" {
     url: string;
     connections?: number;
     duration?: number;
+    /** Requests to send in all; the run ends when they are answered (overrides duration). */
+    amount?: number;
     timeout?: number;
     headers?: Record<string, string>;
   }

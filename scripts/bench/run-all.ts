@@ -181,7 +181,7 @@ ${notes.map((note) => `- ${note}`).join("\n")}
   at the start of the step into .next-bench), served by \`npm start -- --no-build\` on a 500-exchanger fleet (the 24 demo exchangers and copies of them, 19,704 hourly readings
   each), signed in as the demo viewer. Latency percentiles are over every answered request; server CPU per request
   is the web server process's CPU time divided by the requests answered. \`GET /api/fleet\` without trend=1 leaves out
-  the trend line points; with Accept-Encoding: gzip the same answer travels compressed.
+  the trend line points; with Accept-Encoding: gzip Next's server compresses the same answer for each request.
 - **reassessment jobs**: scripts/bench/workers.ts — every exchanger queued on "reassess-asset", taken by one, then two
   \`npm run worker\` processes (one job at a time each), from the first job queued to the last completed.
 `;

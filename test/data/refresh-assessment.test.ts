@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { assessmentDocument } from "../../lib/data/assessment-document";
+import { assessmentDocument, toAssessmentDocument } from "../../lib/data/assessment-document";
+import { listAlerts } from "../../lib/data/list-alerts";
 import { recordCleaning } from "../../lib/data/record-cleaning";
-import { refreshAssessment } from "../../lib/data/refresh-assessment";
+import { getStoredAssessment, refreshAssessment } from "../../lib/data/refresh-assessment";
 import { refreshDataQuality } from "../../lib/data/refresh-data-quality";
 import { seedDemoFleetIfEmpty } from "../../lib/data/seed-demo-fleet";
 import { disconnectPrisma } from "../../lib/db";
@@ -62,6 +63,17 @@ describe("assessmentDocument", () => {
     expect(document.series).toBeUndefined();
     const detailed = await assessmentDocument(database.prisma, TAG, { detail: true });
     expect(detailed.kind === "assessed" && (detailed.document.series?.length ?? 0) > 100).toBe(true);
+  });
+
+  it("reads without the series the same document as from the whole stored assessment", async () => {
+    const full = await getStoredAssessment(database.prisma, TAG);
+    if (!full) throw new Error("no stored assessment");
+    expect(full.assessment.foulingResistance.series.length).toBeGreaterThan(100);
+    const alerts = await listAlerts(database.prisma, { tag: TAG });
+    const lookup = await assessmentDocument(database.prisma, TAG);
+    expect(lookup).toEqual({ kind: "assessed", document: toAssessmentDocument(TAG, full.computedAt, full.assessment, alerts, false) });
+    const detailed = await assessmentDocument(database.prisma, TAG, { detail: true });
+    expect(detailed).toEqual({ kind: "assessed", document: toAssessmentDocument(TAG, full.computedAt, full.assessment, alerts, true) });
   });
 
   it("tells an unknown tag apart", async () => {

@@ -32,13 +32,10 @@ export function assetReferenceRating(asset: Asset): Omit<ReferenceConditions, "c
 
 /** The screening model of an asset; roles without a registered instrument get default uncertainties and a placeholder tag. */
 export function exchangerModel(asset: Asset & { instruments: Instrument[] }): ExchangerModel {
-  const capacities = assetHeatCapacities(asset);
+  const { reference, ...rating } = assetReferenceRating(asset);
   return {
-    arrangement: arrangementFromColumns(asset),
-    areaM2: asset.areaM2,
-    hotHeatCapacity: capacities.hot,
-    coldHeatCapacity: capacities.cold,
-    referenceFlows: { hotKgPerS: asset.refHotFlowKgPerS, coldKgPerS: asset.refColdFlowKgPerS },
+    ...rating,
+    referenceFlows: { hotKgPerS: reference.hotFlowKgPerS, coldKgPerS: reference.coldFlowKgPerS },
     instruments: MEASUREMENT_ROLES.map((role) => {
       const registered = asset.instruments.find((instrument) => instrument.role === role);
       if (registered) return { role, tag: registered.tag, standardUncertainty: registered.standardUncertainty };

@@ -6,6 +6,11 @@ import type { PrismaClient } from "../../generated/prisma/client";
 import { passwordProblems, UserAccountError } from "./create-user";
 import { recordAudit, type Actor } from "./record-audit";
 
+/** "1 session" / "3 sessions": the count of ended sessions as the audit summary, the admin page and the CLI say it. */
+export function sessionCount(count: number): string {
+  return `${count} ${count === 1 ? "session" : "sessions"}`;
+}
+
 export interface PasswordResetResult {
   email: string;
   /** Sessions of the user that were ended (signed out everywhere, also a session stolen with the old password). */
@@ -38,7 +43,7 @@ export async function setUserPassword(prisma: PrismaClient, userId: string, pass
       action: "user.password-reset",
       entity: "user",
       entityId: userId,
-      summary: `set a new password for ${user.email} and ended ${sessionsEnded} ${sessionsEnded === 1 ? "session" : "sessions"}`,
+      summary: `set a new password for ${user.email} and ended ${sessionCount(sessionsEnded)}`,
       details: { email: user.email, sessionsEnded },
     });
     return { email: user.email, sessionsEnded };

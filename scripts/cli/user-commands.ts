@@ -7,7 +7,7 @@ import { changeUserRole } from "../../lib/data/change-user-role";
 import { createUser, normaliseEmail, UserAccountError } from "../../lib/data/create-user";
 import { listUsers } from "../../lib/data/list-users";
 import { removeUser } from "../../lib/data/remove-user";
-import { setUserPassword } from "../../lib/data/set-user-password";
+import { sessionCount, setUserPassword } from "../../lib/data/set-user-password";
 import { getPrisma } from "../../lib/db";
 import { printJson, UsageError, withDatabase } from "./context";
 
@@ -89,7 +89,7 @@ export function registerUserCommands(program: Command): void {
       const password = options.password ?? (await readFirstLine());
       await withDatabase(async () => {
         const result = await asUsage(async () => setUserPassword(getPrisma(), await userIdByEmail(options.email), password, cliActor()));
-        console.log(`Set a new password for ${result.email}; ended ${result.sessionsEnded} ${result.sessionsEnded === 1 ? "session" : "sessions"}.`);
+        console.log(`Set a new password for ${result.email}; ended ${sessionCount(result.sessionsEnded)}.`);
       });
     });
   user
@@ -99,7 +99,7 @@ export function registerUserCommands(program: Command): void {
     .action(async (options: { email: string }) => {
       await withDatabase(async () => {
         const result = await asUsage(async () => removeUser(getPrisma(), await userIdByEmail(options.email), cliActor()));
-        console.log(`Removed ${result.email} (${result.role}); ended ${result.sessionsEnded} ${result.sessionsEnded === 1 ? "session" : "sessions"}.`);
+        console.log(`Removed ${result.email} (${result.role}); ended ${sessionCount(result.sessionsEnded)}.`);
       });
     });
 }

@@ -6,7 +6,7 @@ import { requireRole } from "@/lib/auth/require-role";
 import { changeUserRole } from "@/lib/data/change-user-role";
 import { createUser, UserAccountError } from "@/lib/data/create-user";
 import { removeUser } from "@/lib/data/remove-user";
-import { setUserPassword } from "@/lib/data/set-user-password";
+import { sessionCount, setUserPassword } from "@/lib/data/set-user-password";
 import { getPrisma } from "@/lib/db";
 
 function back(result: { saved?: string; error?: string }): never {
@@ -45,8 +45,7 @@ export async function setUserPasswordAction(formData: FormData): Promise<void> {
   const admin = await requireRole("users.manage");
   try {
     const result = await setUserPassword(getPrisma(), String(formData.get("userId") ?? ""), String(formData.get("password") ?? ""), { userId: admin.id, name: admin.email });
-    const ended = result.sessionsEnded === 1 ? "1 session" : `${result.sessionsEnded} sessions`;
-    back({ saved: `Set a new password for ${result.email}; ${ended} ended.` });
+    back({ saved: `Set a new password for ${result.email}; ${sessionCount(result.sessionsEnded)} ended.` });
   } catch (error) {
     if (!(error instanceof UserAccountError)) throw error;
     back({ error: error.message });
